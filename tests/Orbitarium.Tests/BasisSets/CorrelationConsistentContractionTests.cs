@@ -13,16 +13,18 @@ namespace Orbitarium.Tests.BasisSets;
 /// </summary>
 public class CorrelationConsistentContractionTests
 {
-    public static TheoryData<string, string, int> Atoms() => new()
+    // Ground-state multiplicities (common practice): B ²P, C ³P, N ⁴S, Ne ¹S. The printed coefficients have 6
+    // decimals: agreement within 1.5e-6 (rounding plus SCF convergence). O (p⁴) and F (p⁵) are not checked this way:
+    // their single-determinant ROHF orbitals differ from the paper's spherically averaged ones by up to 2e-4.
+    public static TheoryData<string, string, int, double> Atoms() => new()
     {
-        // Ground-state multiplicities (common practice): B ²P, C ³P, N ⁴S, Ne ¹S.
-        { "cc-pVDZ", "B", 2 }, { "cc-pVDZ", "C", 3 }, { "cc-pVDZ", "N", 4 }, { "cc-pVDZ", "Ne", 1 },
-        { "cc-pVTZ", "B", 2 }, { "cc-pVTZ", "C", 3 }, { "cc-pVTZ", "N", 4 }, { "cc-pVTZ", "Ne", 1 },
+        { "cc-pVDZ", "B", 2, 1.5e-6 }, { "cc-pVDZ", "C", 3, 1.5e-6 }, { "cc-pVDZ", "N", 4, 1.5e-6 }, { "cc-pVDZ", "Ne", 1, 1.5e-6 },
+        { "cc-pVTZ", "B", 2, 1.5e-6 }, { "cc-pVTZ", "C", 3, 1.5e-6 }, { "cc-pVTZ", "N", 4, 1.5e-6 }, { "cc-pVTZ", "Ne", 1, 1.5e-6 },
     };
 
     [Theory]
     [MemberData(nameof(Atoms))]
-    public void Contractions_are_the_atomic_orbitals_in_the_primitive_set(string setName, string symbol, int multiplicity)
+    public void Contractions_are_the_atomic_orbitals_in_the_primitive_set(string setName, string symbol, int multiplicity, double tolerance)
     {
         var shells = BasisSetLibrary.Get(setName).ShellsFor(PeriodicTable.BySymbol(symbol));
         var sContracted = shells.Where(s => s.AngularMomentum == 0 && s.PrimitiveCount > 1).ToArray();
@@ -40,11 +42,10 @@ public class CorrelationConsistentContractionTests
         var c = result.CoefficientsAlpha;
         int ns = sExp.Length;
 
-        // Printed to 6 decimals: agreement within 1.5e-6 (rounding plus SCF convergence).
         for (int orbital = 0; orbital < 2; orbital++)
         {
             var computed = Enumerable.Range(0, ns).Select(i => c[i, orbital]).ToArray();
-            AssertSameUpToSign(sContracted[orbital].Coefficients.ToArray(), computed, $"{setName} {symbol} {orbital + 1}s");
+            AssertSameUpToSign(sContracted[orbital].Coefficients.ToArray(), computed, tolerance, $"{setName} {symbol} {orbital + 1}s");
         }
 
         // 2p: the occupied orbital after 1s and 2s; take its largest Cartesian direction and normalise the radial part.
@@ -55,15 +56,15 @@ public class CorrelationConsistentContractionTests
         for (int i = 0; i < pExp.Length; i++)
             for (int j = 0; j < pExp.Length; j++)
                 norm += radial[i] * radial[j] * Math.Pow(2 * Math.Sqrt(pExp[i] * pExp[j]) / (pExp[i] + pExp[j]), 2.5);
-        AssertSameUpToSign(pContracted.Coefficients.ToArray(), [.. radial.Select(x => x / Math.Sqrt(norm))], $"{setName} {symbol} 2p");
+        AssertSameUpToSign(pContracted.Coefficients.ToArray(), [.. radial.Select(x => x / Math.Sqrt(norm))], tolerance, $"{setName} {symbol} 2p");
     }
 
-    private static void AssertSameUpToSign(double[] printed, double[] computed, string what)
+    private static void AssertSameUpToSign(double[] printed, double[] computed, double tolerance, string what)
     {
         double dot = Vector<double>.Build.DenseOfArray(printed).DotProduct(Vector<double>.Build.DenseOfArray(computed));
         double sign = Math.Sign(dot);
         for (int i = 0; i < printed.Length; i++)
-            Assert.True(Math.Abs(printed[i] - sign * computed[i]) < 1.5e-6,
+            Assert.True(Math.Abs(printed[i] - sign * computed[i]) < tolerance,
                 $"{what}, primitive {i + 1}: printed {printed[i]:F6}, computed {sign * computed[i]:F6}");
     }
 }

@@ -4,7 +4,8 @@ namespace Orbitarium.Geometry.Coordinates;
 
 /// <summary>The dihedral (torsion) angle i–j–k–l in radians, in (−π, π]; also used as an out-of-plane coordinate.</summary>
 /// <remarks>Value and derivatives follow A. Blondel and M. Karplus, J. Comput. Chem. 17, 1132 (1996), eqs. 20–27,
-/// which stay finite for planar arrangements.</remarks>
+/// which stay finite for planar arrangements; the sign is flipped to the IUPAC convention used by
+/// <see cref="Molecule.DihedralDegrees"/>.</remarks>
 public sealed class Dihedral : InternalCoordinate
 {
     /// <summary>The dihedral i–j–k–l about the j–k axis (0-based indices).</summary>
@@ -49,7 +50,7 @@ public sealed class Dihedral : InternalCoordinate
         var b = Vector3D.Cross(h, g);
         double y = Vector3D.Dot(Vector3D.Cross(b, a), g) / g.Length;
         double x = Vector3D.Dot(a, b);
-        return Math.Atan2(y, x);
+        return -Math.Atan2(y, x); // IUPAC sign (clockwise looking along j→k is positive)
     }
 
     /// <inheritdoc />
@@ -66,9 +67,9 @@ public sealed class Dihedral : InternalCoordinate
         var dl = lg / b2 * b;
         var dj = lg / a2 * a + fg / (a2 * lg) * a - hg / (b2 * lg) * b;
         var dk = hg / (b2 * lg) * b - fg / (a2 * lg) * a - lg / b2 * b;
-        Add(row, I, di);
-        Add(row, J, dj);
-        Add(row, K, dk);
-        Add(row, L, dl);
+        Add(row, I, -di);
+        Add(row, J, -dj);
+        Add(row, K, -dk);
+        Add(row, L, -dl);
     }
 }

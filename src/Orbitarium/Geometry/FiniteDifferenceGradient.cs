@@ -36,19 +36,28 @@ public static class FiniteDifferenceGradient
             CancellationToken = cancellationToken,
             MaxDegreeOfParallelism = maxDegreeOfParallelism > 0 ? maxDegreeOfParallelism : Environment.ProcessorCount,
         };
-        Parallel.For(0, 2 * n + 1, options, k =>
+        try
         {
-            var m = molecule;
-            if (k < 2 * n)
+            Parallel.For(0, 2 * n + 1, options, k =>
             {
-                var x = (double[])x0.Clone();
-                x[k / 2] += (k % 2 == 0 ? 1 : -1) * stepBohr;
-                m = molecule.WithPositionsBohr(x);
-            }
-            var p = surface.Evaluate(m, false, cancellationToken);
-            energies[k] = p.EnergyHartree;
-            dipoles[k] = p.DipoleAtomicUnits;
-        });
+                var m = molecule;
+                if (k < 2 * n)
+                {
+                    var x = (double[])x0.Clone();
+                    x[k / 2] += (k % 2 == 0 ? 1 : -1) * stepBohr;
+                    m = molecule.WithPositionsBohr(x);
+                }
+                var p = surface.Evaluate(m, false, cancellationToken);
+                energies[k] = p.EnergyHartree;
+                dipoles[k] = p.DipoleAtomicUnits;
+            });
+        }
+        catch (AggregateException e) when (e.InnerExceptions.Count > 0)
+        {
+            // Surface the first real failure (e.g. an SCF that did not converge) rather than the wrapper.
+            System.Runtime.ExceptionServices.ExceptionDispatchInfo.Capture(e.InnerExceptions[0]).Throw();
+            throw;
+        }
         var g = new double[n];
         for (int i = 0; i < n; i++) g[i] = (energies[2 * i] - energies[2 * i + 1]) / (2 * stepBohr);
         return new SurfacePoint(molecule, energies[2 * n], [.. g], GradientSource.FiniteDifference, dipoles[2 * n]);

@@ -32,18 +32,27 @@ public static class FiniteDifferenceHessian
         var points = new SurfacePoint[2 * n + 1];
         int done = 0;
         var options = new ParallelOptions { CancellationToken = cancellationToken, MaxDegreeOfParallelism = Environment.ProcessorCount };
-        Parallel.For(0, 2 * n + 1, options, k =>
+        try
         {
-            var m = molecule;
-            if (k < 2 * n)
+            Parallel.For(0, 2 * n + 1, options, k =>
             {
-                var x = (double[])x0.Clone();
-                x[k / 2] += (k % 2 == 0 ? 1 : -1) * stepBohr;
-                m = molecule.WithPositionsBohr(x);
-            }
-            points[k] = surface.EvaluateWithGradient(m, stepBohr, cancellationToken);
-            progress?.Report(Interlocked.Increment(ref done));
-        });
+                var m = molecule;
+                if (k < 2 * n)
+                {
+                    var x = (double[])x0.Clone();
+                    x[k / 2] += (k % 2 == 0 ? 1 : -1) * stepBohr;
+                    m = molecule.WithPositionsBohr(x);
+                }
+                points[k] = surface.EvaluateWithGradient(m, stepBohr, cancellationToken);
+                progress?.Report(Interlocked.Increment(ref done));
+            });
+        }
+        catch (AggregateException e) when (e.InnerExceptions.Count > 0)
+        {
+            // Surface the first real failure (e.g. an SCF that did not converge) rather than the wrapper.
+            System.Runtime.ExceptionServices.ExceptionDispatchInfo.Capture(e.InnerExceptions[0]).Throw();
+            throw;
+        }
         var h = Matrix<double>.Build.Dense(n, n);
         for (int i = 0; i < n; i++)
             for (int j = 0; j < n; j++)

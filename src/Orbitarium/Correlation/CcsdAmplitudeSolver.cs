@@ -49,7 +49,7 @@ internal sealed class CcsdAmplitudeSolver
                 for (int a = 0; a < v; a++)
                     for (int b = 0; b < v; b++)
                         T2[T2i(i, j, a, b)] = G(i, j, o + a, o + b) / (d1[i * v + a] + d1[j * v + b]);
-        double mp2 = Energy(T1, T2);
+        double mp2 = Energy(new double[T1.Length], T2);
         var energies = new List<double>();
         var residuals = new List<double>();
         var diis = new AmplitudeDiis(options.DiisVectors);

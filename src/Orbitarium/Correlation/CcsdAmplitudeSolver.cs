@@ -9,9 +9,21 @@ internal sealed class CcsdAmplitudeSolver
     private readonly int _n, _o, _v;
     private readonly double[] _f;
     private readonly double[] _g;
+    private readonly int[] _spinOcc;
+    private readonly int[] _spinVir;
+    private readonly int _virtualAlpha;
 
     public CcsdAmplitudeSolver(SpinOrbitalSystem system)
     {
+        // Spin of each occupied and virtual spin orbital (0 α, 1 β); virtual α come first, so a spin is a contiguous range.
+        _spinOcc = new int[system.Occupied];
+        for (int i = 0; i < system.Occupied; i++) _spinOcc[i] = system.IsBeta[i] ? 1 : 0;
+        _spinVir = new int[system.Virtual];
+        for (int a = 0; a < system.Virtual; a++)
+        {
+            _spinVir[a] = system.IsBeta[system.Occupied + a] ? 1 : 0;
+            if (_spinVir[a] == 0) _virtualAlpha++;
+        }
         _n = system.Count;
         _o = system.Occupied;
         _v = system.Virtual;
@@ -29,6 +41,14 @@ internal sealed class CcsdAmplitudeSolver
 
     public sealed record Outcome(double Energy, double Mp2Energy, int Iterations, bool Converged, string StopReason,
         List<double> EnergyHistory, List<double> ResidualHistory, double T1Diagnostic);
+
+    /// <summary>The virtual range (start, length) of the given spin (0 α, 1 β); empty for any other value.</summary>
+    private (int Start, int Length) PartnerRange(int spin) => spin switch
+    {
+        0 => (0, _virtualAlpha),
+        1 => (_virtualAlpha, _v - _virtualAlpha),
+        _ => (0, 0),
+    };
 
     private double G(int p, int q, int r, int s) => _g[((p * _n + q) * _n + r) * _n + s];
     private int T2i(int i, int j, int a, int b) => ((i * _o + j) * _v + a) * _v + b;
@@ -222,6 +242,7 @@ internal sealed class CcsdAmplitudeSolver
                 for (int e = 0; e < v; e++)
                     for (int j = 0; j < o; j++)
                     {
+                        if (_spinOcc[m] + _spinVir[b] != _spinVir[e] + _spinOcc[j]) continue;
                         double val = G(m, o + b, o + e, j);
                         for (int ff = 0; ff < v; ff++)
                             val += t1[j * v + ff] * G(m, o + b, o + e, o + ff);
@@ -260,6 +281,7 @@ internal sealed class CcsdAmplitudeSolver
         {
             for (int a = 0; a < v; a++)
             {
+                if (_spinOcc[i] != _spinVir[a]) continue;
                 double num = f[i * n + o + a];
                 for (int e = 0; e < v; e++) num += t1[i * v + e] * fae[a * v + e];
                 for (int m = 0; m < o; m++) num -= t1[m * v + a] * fmi[m * o + i];
@@ -290,18 +312,25 @@ internal sealed class CcsdAmplitudeSolver
             // Z[a, m] = Σ_ef τ_ij^ef ⟨am||ef⟩
             var z = new double[v * o];
             int tbij = T2i(i, j, 0, 0);
+            int sij = _spinOcc[i] + _spinOcc[j];
             for (int a = 0; a < v; a++)
                 for (int m = 0; m < o; m++)
                 {
+                    if (_spinVir[a] + _spinOcc[m] != sij) continue;
                     double s = 0;
                     int gb = ((o + a) * n + m) * n * n;
                     for (int e = 0; e < v; e++)
-                        s += MolecularIntegralTransformation.Dot(tau.AsSpan(tbij + e * v, v), _g.AsSpan(gb + (o + e) * n + o, v));
+                    {
+                        var (f0, fl) = PartnerRange(sij - _spinVir[e]);
+                        if (fl > 0)
+                            s += MolecularIntegralTransformation.Dot(tau.AsSpan(tbij + e * v + f0, fl), _g.AsSpan(gb + (o + e) * n + o + f0, fl));
+                    }
                     z[a * o + m] = s;
                 }
             for (int a = 0; a < v; a++)
                 for (int b = a + 1; b < v; b++)
                 {
+                    if (_spinVir[a] + _spinVir[b] != sij) continue;
                     double num = G(i, j, o + a, o + b);
                     for (int e = 0; e < v; e++)
                         num += t2[T2i(i, j, a, e)] * faeT[b * v + e] - t2[T2i(i, j, b, e)] * faeT[a * v + e];
@@ -313,7 +342,11 @@ internal sealed class CcsdAmplitudeSolver
                     int gab = ((o + a) * n + o + b) * n * n;
                     double ladder = 0;
                     for (int e = 0; e < v; e++)
-                        ladder += MolecularIntegralTransformation.Dot(tau.AsSpan(tbij + e * v, v), _g.AsSpan(gab + (o + e) * n + o, v));
+                    {
+                        var (f0, fl) = PartnerRange(sij - _spinVir[e]);
+                        if (fl > 0)
+                            ladder += MolecularIntegralTransformation.Dot(tau.AsSpan(tbij + e * v + f0, fl), _g.AsSpan(gab + (o + e) * n + o + f0, fl));
+                    }
                     num += 0.5 * ladder;
                     for (int m = 0; m < o; m++)
                         num -= 0.5 * (t1[m * v + b] * z[a * o + m] - t1[m * v + a] * z[b * o + m]);

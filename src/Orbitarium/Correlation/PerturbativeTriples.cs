@@ -17,6 +17,7 @@ internal static class PerturbativeTriples
         int n = system.Count, o = system.Occupied, v = system.Virtual;
         var g = system.Antisymmetrized;
         var f = system.Fock;
+        var beta = system.IsBeta;
         if (o < 3 || v < 3) return 0;
         // A[i, b, c, e] = ⟨ei||bc⟩ (contiguous in e); B[j, k, a, m] = ⟨ma||jk⟩ (contiguous in m);
         // T2t[b, c, i, m] = t_im^bc (contiguous in m).
@@ -51,10 +52,13 @@ internal static class PerturbativeTriples
             Span<int> ps = [i, j, k, j, i, k, k, j, i];
             Span<double> psign = [1, -1, -1];
             double dijk = f[i * n + i] + f[j * n + j] + f[k * n + k];
+            int betaOcc = (beta[i] ? 1 : 0) + (beta[j] ? 1 : 0) + (beta[k] ? 1 : 0);
             for (int a = 0; a < v; a++)
                 for (int b = a + 1; b < v; b++)
                     for (int c = b + 1; c < v; c++)
                     {
+                        // Amplitudes vanish unless the triple excitation conserves S_z.
+                        if ((beta[o + a] ? 1 : 0) + (beta[o + b] ? 1 : 0) + (beta[o + c] ? 1 : 0) != betaOcc) continue;
                         Span<int> qs = [a, b, c, b, a, c, c, b, a];
                         double con = 0, dis = 0;
                         for (int x = 0; x < 3; x++)

@@ -1,5 +1,8 @@
 using BenchmarkDotNet.Attributes;
+using BenchmarkDotNet.Configs;
 using BenchmarkDotNet.Engines;
+using BenchmarkDotNet.Jobs;
+using BenchmarkDotNet.Toolchains.InProcess.Emit;
 using MathNet.Numerics.LinearAlgebra;
 using Orbitarium.Chemistry;
 using Orbitarium.Correlation;
@@ -11,12 +14,21 @@ namespace Orbitarium.Benchmarks.Correlation;
 /// <summary>
 /// MP2 (the (ia|jb) quarter-transformations plus the energy sum, O(N⁵)) and CCSD / CCSD(T) (O(N⁶) / O(N⁷)) on the
 /// TIDEGLASS water probe in growing basis sets. The RHF reference and the AO integrals are prepared in the set-up, so
-/// only the correlated step is timed. Short single-shot runs: the monitoring strategy with two measured runs.
+/// only the correlated step is timed. Short single-shot runs: the monitoring strategy with two measured runs, in
+/// process (the generated out-of-process project does not build within BenchmarkDotNet's time limit on a busy machine).
 /// </summary>
-[SimpleJob(RunStrategy.Monitoring, launchCount: 1, warmupCount: 0, iterationCount: 2)]
+[Config(typeof(ShortInProcessConfig))]
 [MemoryDiagnoser]
 public class CorrelationBenchmarks
 {
+    /// <summary>One short in-process job: monitoring strategy, no warm-up, two measured runs.</summary>
+    public sealed class ShortInProcessConfig : ManualConfig
+    {
+        public ShortInProcessConfig() =>
+            AddJob(Job.Default.WithStrategy(RunStrategy.Monitoring).WithLaunchCount(1).WithWarmupCount(0).WithIterationCount(2)
+                .WithToolchain(InProcessEmitToolchain.Instance));
+    }
+
     private ScfResult _rhf = null!;
     private double[] _ao = null!;
     private MolecularOrbitalHamiltonian _hamiltonian = null!;

@@ -93,7 +93,7 @@ internal sealed class CorrelationCalcMethod(string name, string description) : I
         {
             case "mp2":
             {
-                var r = request.Timings.Measure("correlation", () => scf.Mp2(options, cancellationToken));
+                var r = request.Timings.Measure("correlation", () => scf.Mp2(options, null, cancellationToken));
                 Energies(r.ReferenceEnergyHartree, r.CorrelationEnergyHartree, r.TotalEnergyHartree);
                 json.Add(new("same_spin_energy", r.SameSpinEnergyHartree));
                 json.Add(new("opposite_spin_energy", r.OppositeSpinEnergyHartree));
@@ -120,7 +120,7 @@ internal sealed class CorrelationCalcMethod(string name, string description) : I
             case "cis" or "rpa":
             {
                 int n = states ?? 5;
-                var r = request.Timings.Measure("correlation", () => name == "cis" ? scf.Cis(n, false, options, cancellationToken) : scf.Rpa(n, false, options, cancellationToken));
+                var r = request.Timings.Measure("correlation", () => name == "cis" ? scf.Cis(n, false, options, null, cancellationToken) : scf.Rpa(n, false, options, null, cancellationToken));
                 Energies(r.ReferenceEnergyHartree, 0.0, scf.TotalEnergyHartree);
                 json.Add(new("manifold", r.Manifold));
                 json.Add(new("excitation_energies", Array(r.ExcitationEnergiesHartree)));

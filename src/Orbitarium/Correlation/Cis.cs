@@ -19,27 +19,34 @@ public static class Cis
     /// <param name="hamiltonian">MO Hamiltonian of a closed-shell RHF reference (with dipole integrals for f).</param>
     /// <param name="states">Number of states (default 5; fewer if the space is smaller).</param>
     /// <param name="options">Frozen core and memory budget.</param>
+    /// <param name="progress">Receives one report (iteration 0, lowest excitation energy, residual 0) when done.</param>
     /// <param name="cancellationToken">Stops the calculation.</param>
-    public static ExcitedStatesResult Singlets(MolecularOrbitalHamiltonian hamiltonian, int states = 5, CorrelationOptions? options = null, CancellationToken cancellationToken = default) =>
-        Run("CIS", "singlet", hamiltonian, states, options, cancellationToken);
+    public static ExcitedStatesResult Singlets(MolecularOrbitalHamiltonian hamiltonian, int states = 5, CorrelationOptions? options = null,
+        IProgress<CorrelationProgress>? progress = null, CancellationToken cancellationToken = default) =>
+        Run("CIS", "singlet", hamiltonian, states, options, progress, cancellationToken);
 
     /// <summary>Lowest triplet CIS states of a closed-shell RHF reference (oscillator strengths are zero).</summary>
     /// <param name="hamiltonian">MO Hamiltonian of a closed-shell RHF reference.</param>
     /// <param name="states">Number of states (default 5).</param>
     /// <param name="options">Frozen core and memory budget.</param>
+    /// <param name="progress">Receives one report (iteration 0, lowest excitation energy, residual 0) when done.</param>
     /// <param name="cancellationToken">Stops the calculation.</param>
-    public static ExcitedStatesResult Triplets(MolecularOrbitalHamiltonian hamiltonian, int states = 5, CorrelationOptions? options = null, CancellationToken cancellationToken = default) =>
-        Run("CIS", "triplet", hamiltonian, states, options, cancellationToken);
+    public static ExcitedStatesResult Triplets(MolecularOrbitalHamiltonian hamiltonian, int states = 5, CorrelationOptions? options = null,
+        IProgress<CorrelationProgress>? progress = null, CancellationToken cancellationToken = default) =>
+        Run("CIS", "triplet", hamiltonian, states, options, progress, cancellationToken);
 
     /// <summary>Lowest CIS states over α and β excitations of a UHF (or closed-shell) reference; spin is not adapted.</summary>
     /// <param name="hamiltonian">MO Hamiltonian of a UHF or RHF reference.</param>
     /// <param name="states">Number of states (default 5).</param>
     /// <param name="options">Frozen core and memory budget.</param>
+    /// <param name="progress">Receives one report (iteration 0, lowest excitation energy, residual 0) when done.</param>
     /// <param name="cancellationToken">Stops the calculation.</param>
-    public static ExcitedStatesResult Unrestricted(MolecularOrbitalHamiltonian hamiltonian, int states = 5, CorrelationOptions? options = null, CancellationToken cancellationToken = default) =>
-        Run("CIS", "unrestricted", hamiltonian, states, options, cancellationToken);
+    public static ExcitedStatesResult Unrestricted(MolecularOrbitalHamiltonian hamiltonian, int states = 5, CorrelationOptions? options = null,
+        IProgress<CorrelationProgress>? progress = null, CancellationToken cancellationToken = default) =>
+        Run("CIS", "unrestricted", hamiltonian, states, options, progress, cancellationToken);
 
-    internal static ExcitedStatesResult Run(string method, string manifold, MolecularOrbitalHamiltonian h, int states, CorrelationOptions? options, CancellationToken ct)
+    internal static ExcitedStatesResult Run(string method, string manifold, MolecularOrbitalHamiltonian h, int states, CorrelationOptions? options,
+        IProgress<CorrelationProgress>? progress, CancellationToken ct)
     {
         ArgumentNullException.ThrowIfNull(h);
         options ??= CorrelationOptions.Default;
@@ -101,6 +108,7 @@ public static class Cis
                 dipoles.Add([.. t]);
                 strengths.Add(2.0 / 3.0 * energies[n] * (t[0] * t[0] + t[1] * t[1] + t[2] * t[2]));
             }
+        progress?.Report(new CorrelationProgress(method, 0, energies[0], 0));
         return new ExcitedStatesResult(method, manifold, h.ReferenceEnergyHartree, [.. energies], strengths.ToImmutable(), dipoles.ToImmutable(), nf);
     }
 }

@@ -18,8 +18,17 @@ public static class Mp2
     /// </summary>
     /// <param name="hamiltonian">MO Hamiltonian of a canonical Hartree–Fock reference.</param>
     /// <param name="options">Frozen core (default none).</param>
+    /// <param name="progress">Receives one report (iteration 0, correlation energy, residual 0) when done.</param>
     /// <param name="cancellationToken">Stops the calculation.</param>
-    public static Mp2Result Compute(MolecularOrbitalHamiltonian hamiltonian, CorrelationOptions? options = null, CancellationToken cancellationToken = default)
+    public static Mp2Result Compute(MolecularOrbitalHamiltonian hamiltonian, CorrelationOptions? options = null,
+        IProgress<CorrelationProgress>? progress = null, CancellationToken cancellationToken = default)
+    {
+        var result = ComputeCore(hamiltonian, options, cancellationToken);
+        progress?.Report(new CorrelationProgress("MP2", 0, result.CorrelationEnergyHartree, 0));
+        return result;
+    }
+
+    private static Mp2Result ComputeCore(MolecularOrbitalHamiltonian hamiltonian, CorrelationOptions? options, CancellationToken cancellationToken)
     {
         ArgumentNullException.ThrowIfNull(hamiltonian);
         options ??= CorrelationOptions.Default;

@@ -16,23 +16,29 @@ public static class Rpa
     /// <param name="hamiltonian">MO Hamiltonian of a closed-shell RHF reference (with dipole integrals for f).</param>
     /// <param name="states">Number of states (default 5).</param>
     /// <param name="options">Frozen core and memory budget.</param>
+    /// <param name="progress">Receives one report (iteration 0, lowest excitation energy, residual 0) when done.</param>
     /// <param name="cancellationToken">Stops the calculation.</param>
-    public static ExcitedStatesResult Singlets(MolecularOrbitalHamiltonian hamiltonian, int states = 5, CorrelationOptions? options = null, CancellationToken cancellationToken = default) =>
-        Cis.Run("RPA", "singlet", hamiltonian, states, options, cancellationToken);
+    public static ExcitedStatesResult Singlets(MolecularOrbitalHamiltonian hamiltonian, int states = 5, CorrelationOptions? options = null,
+        IProgress<CorrelationProgress>? progress = null, CancellationToken cancellationToken = default) =>
+        Cis.Run("RPA", "singlet", hamiltonian, states, options, progress, cancellationToken);
 
     /// <summary>Lowest triplet RPA states of a closed-shell RHF reference.</summary>
     /// <param name="hamiltonian">MO Hamiltonian of a closed-shell RHF reference.</param>
     /// <param name="states">Number of states (default 5).</param>
     /// <param name="options">Frozen core and memory budget.</param>
+    /// <param name="progress">Receives one report (iteration 0, lowest excitation energy, residual 0) when done.</param>
     /// <param name="cancellationToken">Stops the calculation.</param>
-    public static ExcitedStatesResult Triplets(MolecularOrbitalHamiltonian hamiltonian, int states = 5, CorrelationOptions? options = null, CancellationToken cancellationToken = default) =>
-        Cis.Run("RPA", "triplet", hamiltonian, states, options, cancellationToken);
+    public static ExcitedStatesResult Triplets(MolecularOrbitalHamiltonian hamiltonian, int states = 5, CorrelationOptions? options = null,
+        IProgress<CorrelationProgress>? progress = null, CancellationToken cancellationToken = default) =>
+        Cis.Run("RPA", "triplet", hamiltonian, states, options, progress, cancellationToken);
 
     /// <summary>Lowest RPA states over α and β excitations of a UHF (or closed-shell) reference.</summary>
     /// <param name="hamiltonian">MO Hamiltonian of a UHF or RHF reference.</param>
     /// <param name="states">Number of states (default 5).</param>
     /// <param name="options">Frozen core and memory budget.</param>
+    /// <param name="progress">Receives one report (iteration 0, lowest excitation energy, residual 0) when done.</param>
     /// <param name="cancellationToken">Stops the calculation.</param>
-    public static ExcitedStatesResult Unrestricted(MolecularOrbitalHamiltonian hamiltonian, int states = 5, CorrelationOptions? options = null, CancellationToken cancellationToken = default) =>
-        Cis.Run("RPA", "unrestricted", hamiltonian, states, options, cancellationToken);
+    public static ExcitedStatesResult Unrestricted(MolecularOrbitalHamiltonian hamiltonian, int states = 5, CorrelationOptions? options = null,
+        IProgress<CorrelationProgress>? progress = null, CancellationToken cancellationToken = default) =>
+        Cis.Run("RPA", "unrestricted", hamiltonian, states, options, progress, cancellationToken);
 }

@@ -53,8 +53,17 @@ public static class ScfResultCorrelationExtensions
     /// </summary>
     /// <param name="scf">A converged RHF or UHF result.</param>
     /// <param name="options">Frozen core (default none) and memory budget.</param>
+    /// <param name="progress">Receives one report (iteration 0, correlation energy, residual 0) when done.</param>
     /// <param name="cancellationToken">Stops the calculation.</param>
-    public static Mp2Result Mp2(this ScfResult scf, CorrelationOptions? options = null, CancellationToken cancellationToken = default)
+    public static Mp2Result Mp2(this ScfResult scf, CorrelationOptions? options = null, IProgress<CorrelationProgress>? progress = null,
+        CancellationToken cancellationToken = default)
+    {
+        var result = Mp2Core(scf, options, cancellationToken);
+        progress?.Report(new CorrelationProgress("MP2", 0, result.CorrelationEnergyHartree, 0));
+        return result;
+    }
+
+    private static Mp2Result Mp2Core(ScfResult scf, CorrelationOptions? options, CancellationToken cancellationToken)
     {
         ArgumentNullException.ThrowIfNull(scf);
         options ??= CorrelationOptions.Default;
@@ -113,14 +122,15 @@ public static class ScfResultCorrelationExtensions
     /// <param name="states">Number of states (default 5).</param>
     /// <param name="triplets">For an RHF result: triplets instead of singlets (default false). Ignored for UHF.</param>
     /// <param name="options">Frozen core and memory budget.</param>
+    /// <param name="progress">Receives one report (iteration 0, lowest excitation energy, residual 0) when done.</param>
     /// <param name="cancellationToken">Stops the calculation.</param>
     public static ExcitedStatesResult Cis(this ScfResult scf, int states = 5, bool triplets = false, CorrelationOptions? options = null,
-        CancellationToken cancellationToken = default)
+        IProgress<CorrelationProgress>? progress = null, CancellationToken cancellationToken = default)
     {
         RequireRhfOrUhf(scf, "CIS");
         var h = Hamiltonian(scf, options, "CIS", cancellationToken);
-        if (scf.Reference == ScfReference.Unrestricted) return Correlation.Cis.Unrestricted(h, states, options, cancellationToken);
-        return triplets ? Correlation.Cis.Triplets(h, states, options, cancellationToken) : Correlation.Cis.Singlets(h, states, options, cancellationToken);
+        if (scf.Reference == ScfReference.Unrestricted) return Correlation.Cis.Unrestricted(h, states, options, progress, cancellationToken);
+        return triplets ? Correlation.Cis.Triplets(h, states, options, progress, cancellationToken) : Correlation.Cis.Singlets(h, states, options, progress, cancellationToken);
     }
 
     /// <summary>RPA (TDHF) excited states: singlets or triplets of an RHF result, or the unrestricted manifold of a UHF result.</summary>
@@ -128,14 +138,15 @@ public static class ScfResultCorrelationExtensions
     /// <param name="states">Number of states (default 5).</param>
     /// <param name="triplets">For an RHF result: triplets instead of singlets (default false).</param>
     /// <param name="options">Frozen core and memory budget.</param>
+    /// <param name="progress">Receives one report (iteration 0, lowest excitation energy, residual 0) when done.</param>
     /// <param name="cancellationToken">Stops the calculation.</param>
     public static ExcitedStatesResult Rpa(this ScfResult scf, int states = 5, bool triplets = false, CorrelationOptions? options = null,
-        CancellationToken cancellationToken = default)
+        IProgress<CorrelationProgress>? progress = null, CancellationToken cancellationToken = default)
     {
         RequireRhfOrUhf(scf, "RPA");
         var h = Hamiltonian(scf, options, "RPA", cancellationToken);
-        if (scf.Reference == ScfReference.Unrestricted) return Correlation.Rpa.Unrestricted(h, states, options, cancellationToken);
-        return triplets ? Correlation.Rpa.Triplets(h, states, options, cancellationToken) : Correlation.Rpa.Singlets(h, states, options, cancellationToken);
+        if (scf.Reference == ScfReference.Unrestricted) return Correlation.Rpa.Unrestricted(h, states, options, progress, cancellationToken);
+        return triplets ? Correlation.Rpa.Triplets(h, states, options, progress, cancellationToken) : Correlation.Rpa.Singlets(h, states, options, progress, cancellationToken);
     }
 
     /// <summary>Full CI in the orbitals of any Hartree–Fock result (see <see cref="FullCi"/>).</summary>

@@ -41,6 +41,16 @@ public class Mp2Tests
         }
 
         [Fact]
+        public void Reports_its_energy_through_progress()
+        {
+            var reports = new List<CorrelationProgress>();
+            var r = Mp2.Compute(TestHamiltonians.H2(), null, new SyncProgress(reports));
+            Assert.Single(reports);
+            Assert.Equal(r.CorrelationEnergyHartree, reports[0].EnergyHartree);
+            Assert.Equal("MP2", reports[0].Method);
+        }
+
+        [Fact]
         public void Refuses_a_restricted_open_shell_and_names_the_right_reference()
         {
             var e = Assert.Throws<OrbitariumInputException>(() => Mp2.Compute(TestHamiltonians.Random(5, 2, 1, 1)));

@@ -82,8 +82,9 @@ public sealed class ElectronRepulsionTensor
         return 8 * (m * (m + 1) / 2);
     }
 
-    /// <summary>Largest basis a packed tensor can hold (one .NET array).</summary>
-    public static int MaxFunctionCount => 400;
+    /// <summary>Largest basis a packed tensor can hold in one .NET array (M(M+1)/2 ≤ 2³¹ − 57 values: N = 360,
+    /// about 17 GB).</summary>
+    public static int MaxFunctionCount => 360;
 
     /// <summary>A dense copy, element [((i·N + j)·N + k)·N + l] = (ij|kl). Meant for small bases (N⁴ doubles).</summary>
     /// <exception cref="InvalidOperationException">N⁴ exceeds 2^27 elements (1 GiB).</exception>

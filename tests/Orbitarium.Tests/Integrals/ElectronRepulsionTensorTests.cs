@@ -85,6 +85,22 @@ public class ElectronRepulsionTensorTests
         for (int x = 0; x < d.Length; x++) Assert.True(Math.Abs(d[x] - e[x]) < 1e-12);
     }
 
+    private sealed class Recorder : IProgress<double>
+    {
+        public readonly List<double> Values = [];
+        public void Report(double value) { lock (Values) Values.Add(value); }
+    }
+
+    [Fact]
+    public void Progress_rises_to_completion()
+    {
+        var recorder = new Recorder();
+        ElectronRepulsionTensor.Compute(TestBases.WaterSpdf(true), recorder);
+        Assert.NotEmpty(recorder.Values);
+        Assert.Equal(1.0, recorder.Values.Max(), 12);
+        Assert.All(recorder.Values, v => Assert.InRange(v, 0.0, 1.0));
+    }
+
     [Fact]
     public void Cancellation_is_honoured()
     {

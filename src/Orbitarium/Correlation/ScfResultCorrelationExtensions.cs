@@ -1,0 +1,215 @@
+using MathNet.Numerics.LinearAlgebra;
+using Orbitarium.Integrals;
+using Orbitarium.Scf;
+
+namespace Orbitarium.Correlation;
+
+/// <summary>
+/// Correlated methods on a Hartree–Fock result, fluent: <c>rhf.Mp2()</c>, <c>rhf.Ccsd()</c>, <c>rhf.CcsdT()</c>,
+/// <c>rhf.Cis(5)</c>, <c>rhf.Rpa(5)</c>, <c>rhf.Fci(3)</c>, <c>uhf.Mp2()</c>, …
+/// </summary>
+/// <remarks>
+/// Each call computes the AO repulsion integrals of the result's basis, transforms them to the SCF orbitals
+/// (<see cref="MolecularIntegralTransformation"/>, four O(N⁵) quarter-transformations) and runs the method.
+/// Options default to <see cref="CorrelationOptions.Default"/>: no frozen core (all electrons correlated), energy
+/// threshold 1e-8 Eh, residual 1e-7, 100 iterations, 8 DIIS vectors, 2 GiB memory budget. To run several methods on
+/// the same orbitals, build the Hamiltonian once with <see cref="ToMolecularOrbitalHamiltonian"/>.
+/// The reference must be a converged Hartree–Fock result (not Kohn–Sham); MP2, CCSD and CIS need RHF (closed shell)
+/// or UHF; full CI accepts any of RHF, UHF, ROHF.
+/// </remarks>
+public static class ScfResultCorrelationExtensions
+{
+    /// <summary>
+    /// The MO Hamiltonian of a Hartree–Fock result: AO integrals transformed to its orbitals, with MO dipole integrals
+    /// (about the centre of nuclear charge) for oscillator strengths.
+    /// </summary>
+    /// <param name="scf">A converged RHF, UHF or ROHF result.</param>
+    /// <param name="options">Memory budget for the AO and MO integrals (default 2 GiB).</param>
+    /// <param name="cancellationToken">Stops the integral computation.</param>
+    public static MolecularOrbitalHamiltonian ToMolecularOrbitalHamiltonian(this ScfResult scf, CorrelationOptions? options = null,
+        CancellationToken cancellationToken = default)
+    {
+        ArgumentNullException.ThrowIfNull(scf);
+        options ??= CorrelationOptions.Default;
+        CheckReference(scf, "a correlated method");
+        int n = scf.Basis.FunctionCount, m = scf.OrbitalCount;
+        double n4 = (double)n * n * n * n, m4 = (double)m * m * m * m;
+        bool unrestricted = scf.Reference == ScfReference.Unrestricted;
+        MemoryEstimate.Require("The AO→MO integral transformation", 2 * n4 + (unrestricted ? 3 : 1) * m4, options,
+            "use a smaller basis or raise the budget (WithMemoryBudgetMebibytes).");
+        var ao = ElectronRepulsionTensor.Compute(scf.Basis, null, cancellationToken).ToDense();
+        var dipole = OneElectronIntegrals.Dipole(scf.Basis, scf.Molecule.CenterOfNuclearChargeBohr);
+        int na = scf.AlphaElectronCount, nb = scf.BetaElectronCount;
+        if (unrestricted)
+            return MolecularIntegralTransformation.UnrestrictedHamiltonian(scf.CoreHamiltonian, ao, scf.CoefficientsAlpha, scf.CoefficientsBeta,
+                scf.OrbitalEnergiesAlphaHartree.AsSpan(), scf.OrbitalEnergiesBetaHartree.AsSpan(), na, nb, scf.NuclearRepulsionHartree, dipole, cancellationToken);
+        return MolecularIntegralTransformation.RestrictedHamiltonian(scf.CoreHamiltonian, ao, scf.CoefficientsAlpha,
+            scf.OrbitalEnergiesAlphaHartree.AsSpan(), na, nb, scf.NuclearRepulsionHartree, dipole, cancellationToken);
+    }
+
+    /// <summary>
+    /// MP2 on an RHF (closed-shell formulas) or UHF result, with same-spin and opposite-spin parts (see <see cref="Correlation.Mp2"/>).
+    /// Only the (ia|jb) integrals are transformed.
+    /// </summary>
+    /// <param name="scf">A converged RHF or UHF result.</param>
+    /// <param name="options">Frozen core (default none) and memory budget.</param>
+    /// <param name="progress">Receives one report (iteration 0, correlation energy, residual 0) when done.</param>
+    /// <param name="cancellationToken">Stops the calculation.</param>
+    public static Mp2Result Mp2(this ScfResult scf, CorrelationOptions? options = null, IProgress<CorrelationProgress>? progress = null,
+        CancellationToken cancellationToken = default)
+    {
+        var result = Mp2Core(scf, options, cancellationToken);
+        progress?.Report(new CorrelationProgress("MP2", 0, result.CorrelationEnergyHartree, 0));
+        return result;
+    }
+
+    private static Mp2Result Mp2Core(ScfResult scf, CorrelationOptions? options, CancellationToken cancellationToken)
+    {
+        ArgumentNullException.ThrowIfNull(scf);
+        options ??= CorrelationOptions.Default;
+        CheckReference(scf, "MP2");
+        RequireRhfOrUhf(scf, "MP2");
+        int n = scf.Basis.FunctionCount, m = scf.OrbitalCount, nf = options.FrozenCoreOrbitals;
+        int na = scf.AlphaElectronCount, nb = scf.BetaElectronCount;
+        Correlation.Mp2.CheckFrozenCore(nf, na, nb);
+        double n4 = (double)n * n * n * n;
+        MemoryEstimate.Require("MP2", 2 * n4 + 3.0 * na * m * n * n + 3.0 * na * na * m * m, options, "use a smaller basis or raise the budget (WithMemoryBudgetMebibytes).");
+        var ao = ElectronRepulsionTensor.Compute(scf.Basis, null, cancellationToken).ToDense();
+        Matrix<double> Occ(Matrix<double> c, int occ) => c.SubMatrix(0, n, nf, occ - nf);
+        Matrix<double> Vir(Matrix<double> c, int occ) => c.SubMatrix(0, n, occ, m - occ);
+        if (scf.Reference == ScfReference.Restricted)
+        {
+            var c = scf.CoefficientsAlpha;
+            var iajb = MolecularIntegralTransformation.TransformRepulsion(ao, Occ(c, na), Vir(c, na), Occ(c, na), Vir(c, na), cancellationToken);
+            return Correlation.Mp2.Restricted(iajb, [.. scf.OrbitalEnergiesAlphaHartree], nf, na, m, scf.TotalEnergyHartree, cancellationToken);
+        }
+        var ca = scf.CoefficientsAlpha;
+        var cb = scf.CoefficientsBeta;
+        var aa = MolecularIntegralTransformation.TransformRepulsion(ao, Occ(ca, na), Vir(ca, na), Occ(ca, na), Vir(ca, na), cancellationToken);
+        var ab = MolecularIntegralTransformation.TransformRepulsion(ao, Occ(ca, na), Vir(ca, na), Occ(cb, nb), Vir(cb, nb), cancellationToken);
+        var bb = MolecularIntegralTransformation.TransformRepulsion(ao, Occ(cb, nb), Vir(cb, nb), Occ(cb, nb), Vir(cb, nb), cancellationToken);
+        return Correlation.Mp2.Unrestricted(aa, ab, bb, [.. scf.OrbitalEnergiesAlphaHartree], [.. scf.OrbitalEnergiesBetaHartree],
+            nf, na, nb, m, scf.TotalEnergyHartree, cancellationToken);
+    }
+
+    /// <summary>CCSD on an RHF or UHF result (see <see cref="Correlation.Ccsd"/>).</summary>
+    /// <param name="scf">A converged RHF or UHF result.</param>
+    /// <param name="options">Thresholds, iterations, DIIS, frozen core, memory budget.</param>
+    /// <param name="progress">Receives (iteration, correlation energy, RMS amplitude change).</param>
+    /// <param name="cancellationToken">Stops the calculation.</param>
+    public static CoupledClusterResult Ccsd(this ScfResult scf, CorrelationOptions? options = null, IProgress<CorrelationProgress>? progress = null,
+        CancellationToken cancellationToken = default)
+    {
+        RequireRhfOrUhf(scf, "CCSD");
+        return Correlation.Ccsd.Compute(Hamiltonian(scf, options, "CCSD", cancellationToken), options, progress, cancellationToken);
+    }
+
+    /// <summary>CCSD followed by the perturbative triples (T) on an RHF or UHF result.</summary>
+    /// <param name="scf">A converged RHF or UHF result.</param>
+    /// <param name="options">Thresholds, iterations, DIIS, frozen core, memory budget.</param>
+    /// <param name="progress">Receives (iteration, correlation energy, RMS amplitude change).</param>
+    /// <param name="cancellationToken">Stops the calculation.</param>
+    public static CoupledClusterResult CcsdT(this ScfResult scf, CorrelationOptions? options = null, IProgress<CorrelationProgress>? progress = null,
+        CancellationToken cancellationToken = default)
+    {
+        RequireRhfOrUhf(scf, "CCSD(T)");
+        return Correlation.Ccsd.ComputeWithTriples(Hamiltonian(scf, options, "CCSD(T)", cancellationToken), options, progress, cancellationToken);
+    }
+
+    /// <summary>CIS excited states: singlets of an RHF result (<paramref name="triplets"/> false) or triplets, or the
+    /// unrestricted manifold of a UHF result.</summary>
+    /// <param name="scf">A converged RHF or UHF result.</param>
+    /// <param name="states">Number of states (default 5).</param>
+    /// <param name="triplets">For an RHF result: triplets instead of singlets (default false). Ignored for UHF.</param>
+    /// <param name="options">Frozen core and memory budget.</param>
+    /// <param name="progress">Receives one report (iteration 0, lowest excitation energy, residual 0) when done.</param>
+    /// <param name="cancellationToken">Stops the calculation.</param>
+    public static ExcitedStatesResult Cis(this ScfResult scf, int states = 5, bool triplets = false, CorrelationOptions? options = null,
+        IProgress<CorrelationProgress>? progress = null, CancellationToken cancellationToken = default)
+    {
+        RequireRhfOrUhf(scf, "CIS");
+        var h = Hamiltonian(scf, options, "CIS", cancellationToken);
+        if (scf.Reference == ScfReference.Unrestricted) return Correlation.Cis.Unrestricted(h, states, options, progress, cancellationToken);
+        return triplets ? Correlation.Cis.Triplets(h, states, options, progress, cancellationToken) : Correlation.Cis.Singlets(h, states, options, progress, cancellationToken);
+    }
+
+    /// <summary>RPA (TDHF) excited states: singlets or triplets of an RHF result, or the unrestricted manifold of a UHF result.</summary>
+    /// <param name="scf">A converged RHF or UHF result.</param>
+    /// <param name="states">Number of states (default 5).</param>
+    /// <param name="triplets">For an RHF result: triplets instead of singlets (default false).</param>
+    /// <param name="options">Frozen core and memory budget.</param>
+    /// <param name="progress">Receives one report (iteration 0, lowest excitation energy, residual 0) when done.</param>
+    /// <param name="cancellationToken">Stops the calculation.</param>
+    public static ExcitedStatesResult Rpa(this ScfResult scf, int states = 5, bool triplets = false, CorrelationOptions? options = null,
+        IProgress<CorrelationProgress>? progress = null, CancellationToken cancellationToken = default)
+    {
+        RequireRhfOrUhf(scf, "RPA");
+        var h = Hamiltonian(scf, options, "RPA", cancellationToken);
+        if (scf.Reference == ScfReference.Unrestricted) return Correlation.Rpa.Unrestricted(h, states, options, progress, cancellationToken);
+        return triplets ? Correlation.Rpa.Triplets(h, states, options, progress, cancellationToken) : Correlation.Rpa.Singlets(h, states, options, progress, cancellationToken);
+    }
+
+    /// <summary>Full CI in the orbitals of any Hartree–Fock result (see <see cref="FullCi"/>).</summary>
+    /// <param name="scf">A converged RHF, UHF or ROHF result.</param>
+    /// <param name="roots">Number of roots (default 1).</param>
+    /// <param name="options">Thresholds, frozen core, memory budget.</param>
+    /// <param name="progress">Receives (iteration, lowest total energy, largest residual).</param>
+    /// <param name="cancellationToken">Stops the calculation.</param>
+    public static ConfigurationInteractionResult Fci(this ScfResult scf, int roots = 1, CorrelationOptions? options = null,
+        IProgress<CorrelationProgress>? progress = null, CancellationToken cancellationToken = default) =>
+        FullCi.Compute(Hamiltonian(scf, options, "FCI", cancellationToken, forFullCi: true), roots, options, progress, cancellationToken);
+
+    /// <summary>CISD in the orbitals of a Hartree–Fock result (see <see cref="Correlation.Cisd"/>; small systems only).</summary>
+    /// <param name="scf">A converged RHF, UHF or ROHF result.</param>
+    /// <param name="roots">Number of roots (default 1).</param>
+    /// <param name="options">Thresholds, frozen core, memory budget.</param>
+    /// <param name="progress">Receives (iteration, lowest total energy, largest residual).</param>
+    /// <param name="cancellationToken">Stops the calculation.</param>
+    public static ConfigurationInteractionResult Cisd(this ScfResult scf, int roots = 1, CorrelationOptions? options = null,
+        IProgress<CorrelationProgress>? progress = null, CancellationToken cancellationToken = default) =>
+        Correlation.Cisd.Compute(Hamiltonian(scf, options, "CISD", cancellationToken, forFullCi: true), roots, options, progress, cancellationToken);
+
+    private static MolecularOrbitalHamiltonian Hamiltonian(ScfResult scf, CorrelationOptions? options, string method, CancellationToken ct, bool forFullCi = false)
+    {
+        ArgumentNullException.ThrowIfNull(scf);
+        CheckReference(scf, method);
+        options ??= CorrelationOptions.Default;
+        if (forFullCi)
+        {
+            // Refuse an oversized determinant space before computing any integral.
+            int nf = options.FrozenCoreOrbitals, n = scf.OrbitalCount - nf;
+            Correlation.Mp2.CheckFrozenCore(nf, scf.AlphaElectronCount, scf.BetaElectronCount);
+            if (n > DeterminantCi.MaximumActiveOrbitals)
+                throw new OrbitariumInputException(
+                    $"{method} is limited to {DeterminantCi.MaximumActiveOrbitals} active orbitals, but this system has {n}: use a smaller basis or freeze core orbitals (WithFrozenCore).");
+            MemoryEstimate.Require(method, DeterminantHamiltonian.Doubles(n, scf.AlphaElectronCount - nf, scf.BetaElectronCount - nf, 52), options,
+                "use fewer orbitals (a smaller basis or frozen core) or raise the budget (WithMemoryBudgetMebibytes).");
+        }
+        else if (method.StartsWith("CCSD", StringComparison.Ordinal))
+        {
+            int nf = options.FrozenCoreOrbitals;
+            MemoryEstimate.Require(method, Correlation.Ccsd.EstimateDoubles(2 * (scf.OrbitalCount - nf), scf.AlphaElectronCount + scf.BetaElectronCount - 2 * nf, options.DiisVectors),
+                options, "use a smaller basis, freeze core orbitals (WithFrozenCore), or raise the budget (WithMemoryBudgetMebibytes).");
+        }
+        return scf.ToMolecularOrbitalHamiltonian(options, ct);
+    }
+
+    private static void CheckReference(ScfResult scf, string method)
+    {
+        ArgumentNullException.ThrowIfNull(scf);
+        if (scf.Options.ExchangeCorrelation is not null)
+            throw new OrbitariumInputException(
+                $"{method} needs a Hartree–Fock reference, but this result is Kohn–Sham ({scf.MethodName}): run RunRhf or RunUhf without a functional first.");
+        if (!scf.Converged)
+            throw new OrbitariumInputException(
+                $"{method} needs a converged reference, but the {scf.MethodName} run stopped ({scf.StopReason}) after {scf.Iterations} iterations: converge the SCF first (more iterations, damping, another guess).");
+    }
+
+    private static void RequireRhfOrUhf(ScfResult scf, string method)
+    {
+        ArgumentNullException.ThrowIfNull(scf);
+        if (scf.Reference == ScfReference.RestrictedOpenShell)
+            throw new OrbitariumInputException(
+                $"{method} is built on RHF (closed shell) or UHF references, not ROHF: for this open shell run RunUhf and ask for {method} on that result.");
+    }
+}

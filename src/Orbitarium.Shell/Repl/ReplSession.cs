@@ -20,6 +20,7 @@ public sealed partial class ReplSession
     private readonly Lock _gate = new();
     private Task<ScriptState<object>> _start;
     private ScriptOptions _scriptOptions;
+    private readonly LiveIterations _live = new();
     private bool _timeNext;
 
     /// <summary>Creates a session writing to <paramref name="console"/>; compilation warms up in the background at once.</summary>
@@ -31,7 +32,7 @@ public sealed partial class ReplSession
         WorkingDirectory = Path.GetFullPath(_options.WorkingDirectory);
         Settings = _options.Settings ?? new ConsoleSettings();
         Renderers = _options.Renderers ?? ValueRendererRegistry.CreateDefault();
-        Globals = new ScriptGlobals(Show, _options.Args, Settings, Renderers, Path.Combine(WorkingDirectory, "plots"));
+        Globals = new ScriptGlobals(Show, _options.Args, Settings, Renderers, Path.Combine(WorkingDirectory, "plots"), _live);
         _scriptOptions = ScriptEnvironment.CreateOptions(null, WorkingDirectory);
         _start = Task.Run(StartAsync);
     }
@@ -159,6 +160,7 @@ public sealed partial class ReplSession
         }
 
         bool hasValue = HasTrailingValue(script);
+        _live.Reset();
         using var submissionCancellation = new CancellationTokenSource();
         Globals.SetToken(submissionCancellation.Token);
         var run = Task.Run(() => script.RunFromAsync(state, _ => true, submissionCancellation.Token), CancellationToken.None);
@@ -212,7 +214,14 @@ public sealed partial class ReplSession
         var interrupted = new TaskCompletionSource(TaskCreationOptions.RunContinuationsAsynchronously);
         using (interrupt.Register(() => interrupted.TrySetResult()))
         {
-            var first = await Task.WhenAny(run, interrupted.Task).ConfigureAwait(false);
+            var first = await Task.WhenAny(run, interrupted.Task, _live.FirstReport).ConfigureAwait(false);
+            if (first == _live.FirstReport)
+            {
+                // The submission runs an SCF with Progress: show its iterations live until it ends or Ctrl+C.
+                await _live.ShowUntilAsync(_console, Task.WhenAny(run, interrupted.Task)).ConfigureAwait(false);
+                first = run.IsCompleted ? run : interrupted.Task;
+                if (first == run) _console.MarkupLine($"[grey]{_live.Count} SCF iteration(s)[/]");
+            }
             if (first == run) return WaitOutcome.Completed;
         }
         await submission.CancelAsync().ConfigureAwait(false);

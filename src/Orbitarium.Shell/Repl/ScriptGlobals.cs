@@ -1,3 +1,4 @@
+using Orbitarium.Scf;
 using Orbitarium.Shell.Repl.Rendering;
 
 namespace Orbitarium.Shell.Repl;
@@ -17,8 +18,9 @@ public sealed class ScriptGlobals
     /// <param name="settings">Display settings of the session.</param>
     /// <param name="renderers">The renderer registry used for values shown at the prompt.</param>
     /// <param name="plotFolder">Folder where figures are written.</param>
+    /// <param name="progress">Receives SCF iterations (a live table at the prompt); null discards them.</param>
     public ScriptGlobals(Action<object?> print, IReadOnlyList<string> args, ConsoleSettings settings,
-        ValueRendererRegistry renderers, string plotFolder)
+        ValueRendererRegistry renderers, string plotFolder, IProgress<ScfIteration>? progress = null)
     {
         ArgumentNullException.ThrowIfNull(print);
         ArgumentNullException.ThrowIfNull(args);
@@ -30,7 +32,14 @@ public sealed class ScriptGlobals
         Settings = settings;
         Renderers = renderers;
         PlotFolder = plotFolder;
+        Progress = progress ?? new Progress<ScfIteration>();
     }
+
+    /// <summary>
+    /// Pass to SCF runs to watch their iterations live at the prompt:
+    /// <c>water.WithBasis(basis).RunRhf(Progress, Token)</c>. In <c>orbitarium run</c> scripts the iterations are not shown.
+    /// </summary>
+    public IProgress<ScfIteration> Progress { get; }
 
     /// <summary>Arguments given after the script file to <c>orbitarium run FILE.csx [args…]</c>; empty at the prompt.</summary>
     public IReadOnlyList<string> Args { get; }

@@ -13,5 +13,6 @@ internal static class BuiltInRenderers
         registry.Register<Matrix<double>>(MatrixRenderer.Render);
         registry.Register<Vector<double>>(MatrixRenderer.RenderVector);
         registry.Register<MolecularBasis>(MolecularBasisRenderer.Render);
+        registry.Register<Orbitarium.Scf.ScfResult>(ScfResultRenderer.Render);
     }
 }

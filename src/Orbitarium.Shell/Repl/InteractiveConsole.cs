@@ -48,7 +48,8 @@ public sealed class InteractiveConsole
         try
         {
             WriteBanner();
-            if (LineEditor.IsSupported(_console)) await RunWithEditorAsync(cancellationToken).ConfigureAwait(false);
+            // An injected key source makes the editor usable whatever the process's own console is.
+            if (_input is not null || LineEditor.IsSupported(_console)) await RunWithEditorAsync(cancellationToken).ConfigureAwait(false);
             else await RunPlainAsync(cancellationToken).ConfigureAwait(false);
             return 0;
         }
@@ -75,12 +76,16 @@ public sealed class InteractiveConsole
         var editor = new LineEditor(_console, _input)
         {
             Prompt = prompt,
-            MultiLine = true,
+            // Enter always submits; incomplete C# continues on the next line (see ReadSubmissionAsync). RadLine's own
+            // multi-line mode would turn an Enter typed ahead during a long submission into a newline.
+            MultiLine = false,
             Completion = completion,
             Highlighter = new CSharpHighlighter(),
         };
         if (_history is not null)
-            foreach (string entry in _history.Entries) editor.History.Add(entry);
+            foreach (string entry in _history.Entries)
+                foreach (string line in entry.Split('\n'))
+                    editor.History.Add(line);
 
         bool first = true;
         while (!_session.ExitRequested && !cancellationToken.IsCancellationRequested)
@@ -114,6 +119,10 @@ public sealed class InteractiveConsole
             try
             {
                 line = await editor.ReadLine(lineCancellation.Token).ConfigureAwait(false);
+            }
+            catch (OperationCanceledException)
+            {
+                line = null;
             }
             finally
             {

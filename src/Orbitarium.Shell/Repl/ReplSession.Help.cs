@@ -58,7 +58,7 @@ public sealed partial class ReplSession
             foreach (var c in Commands) table.AddRow(Markup.Escape(c.Usage), Markup.Escape(c.Summary));
             _console.Write(table);
             _console.MarkupLine("[grey]Type C# to evaluate it; an expression without ';' shows its value. Tab completes names; " +
-                                "Shift+Enter adds a line; Ctrl+C cancels a running submission. Script globals: Print, Args, Token, Settings, Renderers, PlotFolder.[/]");
+                                "incomplete code continues on the next line; Ctrl+C cancels a running submission. Script globals: Print, Args, Token, Progress, Settings, Renderers, PlotFolder.[/]");
             return Done();
         }
         var symbols = await ResolveSymbolsAsync(argument).ConfigureAwait(false);

@@ -143,7 +143,17 @@ public sealed partial class ReplSession
         var state = await _start.ConfigureAwait(false);
         long started = _options.Clock.GetTimestamp();
         var script = state.Script.ContinueWith(code, _scriptOptions);
-        var diagnostics = await Task.Run(() => script.Compile(cancellationToken), CancellationToken.None).ConfigureAwait(false);
+        System.Collections.Immutable.ImmutableArray<Diagnostic> diagnostics;
+        try
+        {
+            diagnostics = await Task.Run(() => script.Compile(cancellationToken), CancellationToken.None).ConfigureAwait(false);
+        }
+        catch (OperationCanceledException)
+        {
+            const string message = "Cancelled while compiling; the session is as before.";
+            _console.MarkupLine($"[yellow]{message}[/]");
+            return new SubmissionResult(SubmissionStatus.Cancelled, null, false, _options.Clock.GetElapsedTime(started), message);
+        }
         if (diagnostics.Any(d => d.Severity == DiagnosticSeverity.Error))
         {
             var formatted = DiagnosticFormatter.Format(diagnostics, null);

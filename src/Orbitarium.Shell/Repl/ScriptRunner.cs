@@ -42,7 +42,9 @@ public static class ScriptRunner
             await error.WriteLineAsync($"No script {fullPath}; check the path.").ConfigureAwait(false);
             return Failure;
         }
-        string code = await File.ReadAllTextAsync(fullPath, cancellationToken).ConfigureAwait(false);
+        // A stream (not a string) so the source has an encoding: debug information, and with it the script
+        // line of a runtime error, needs one.
+        var code = new MemoryStream(await File.ReadAllBytesAsync(fullPath, CancellationToken.None).ConfigureAwait(false));
         var options = ScriptEnvironment.CreateOptions(fullPath, Path.GetDirectoryName(fullPath)!);
         var settings = new ConsoleSettings();
         var globals = new ScriptGlobals(v =>
@@ -51,7 +53,16 @@ public static class ScriptRunner
             },
             args, settings, ValueRendererRegistry.CreateDefault(), Path.Combine(Path.GetDirectoryName(fullPath)!, "plots"));
         var script = CSharpScript.Create(code, options, typeof(ScriptGlobals));
-        var diagnostics = await Task.Run(() => script.Compile(cancellationToken), CancellationToken.None).ConfigureAwait(false);
+        System.Collections.Immutable.ImmutableArray<Diagnostic> diagnostics;
+        try
+        {
+            diagnostics = await Task.Run(() => script.Compile(cancellationToken), CancellationToken.None).ConfigureAwait(false);
+        }
+        catch (OperationCanceledException)
+        {
+            await error.WriteLineAsync($"{fullPath}: cancelled while compiling.").ConfigureAwait(false);
+            return Cancelled;
+        }
         if (diagnostics.Any(d => d.Severity == DiagnosticSeverity.Error))
         {
             foreach (var d in DiagnosticFormatter.Format(diagnostics, fullPath))

@@ -167,6 +167,7 @@ public sealed partial class ReplSession
             string path = ResolvePath(argument);
             if (!Directory.Exists(path)) return Failed($"No folder {path}.");
             WorkingDirectory = path;
+            Globals.ScriptDirectory = path;
             if (_options.FollowProcessDirectory) Directory.SetCurrentDirectory(path);
             lock (_gate) _scriptOptions = ScriptEnvironment.CreateOptions(null, WorkingDirectory);
         }

@@ -33,6 +33,7 @@ public sealed partial class ReplSession
         Settings = _options.Settings ?? new ConsoleSettings();
         Renderers = _options.Renderers ?? ValueRendererRegistry.CreateDefault();
         Globals = new ScriptGlobals(Show, _options.Args, Settings, Renderers, Path.Combine(WorkingDirectory, "plots"), _live);
+        Globals.ScriptDirectory = WorkingDirectory;
         _scriptOptions = ScriptEnvironment.CreateOptions(null, WorkingDirectory);
         _start = Task.Run(StartAsync);
     }

@@ -67,5 +67,11 @@ public sealed class ScriptGlobals
     /// <param name="value">Any value; null prints <c>null</c>.</param>
     public void Print(object? value) => _print(value);
 
+    /// <summary>
+    /// Folder of the script being run by <c>orbitarium run</c> (so a script finds files beside it:
+    /// <c>Path.Combine(ScriptDirectory, "../examples/tg1-water.xyz")</c>); at the prompt, the session folder (<c>#cd</c>).
+    /// </summary>
+    public string ScriptDirectory { get; internal set; } = Environment.CurrentDirectory;
+
     internal void SetToken(CancellationToken token) => _token = token;
 }

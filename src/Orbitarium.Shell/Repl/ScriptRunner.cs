@@ -52,6 +52,7 @@ public static class ScriptRunner
                 lock (output) output.WriteLine(v is string s ? s : v?.ToString() ?? "null");
             },
             args, settings, ValueRendererRegistry.CreateDefault(), Path.Combine(Path.GetDirectoryName(fullPath)!, "plots"));
+        globals.ScriptDirectory = Path.GetDirectoryName(fullPath)!;
         var script = CSharpScript.Create(code, options, typeof(ScriptGlobals));
         System.Collections.Immutable.ImmutableArray<Diagnostic> diagnostics;
         try

@@ -11,14 +11,16 @@ internal static class ConsoleCommand
     {
         var noHistory = new Option<bool>("--no-history") { Description = "Do not read or write the history file." };
         root.Options.Add(noHistory);
-        root.SetAction((parse, cancellationToken) =>
+        // A synchronous action: System.CommandLine then leaves Ctrl+C alone (for asynchronous actions it would end
+        // the process two seconds after Ctrl+C); the console routes Ctrl+C itself.
+        root.SetAction(parse =>
         {
             var console = AnsiConsole.Console;
             var session = new ReplSession(console, new ReplSessionOptions { FollowProcessDirectory = true });
             var history = parse.GetValue(noHistory) ? null : new PersistentHistory(PersistentHistory.DefaultPath);
             using var interrupts = new ConsoleInterruptSource();
             var loop = new InteractiveConsole(session, console, null, history, interrupts);
-            return loop.RunAsync(CancellationToken.None);
+            return loop.RunAsync(CancellationToken.None).GetAwaiter().GetResult();
         });
     }
 }

@@ -14,7 +14,9 @@ internal static class RunCommand
         cmd.Arguments.Add(file);
         cmd.Arguments.Add(args);
         cmd.TreatUnmatchedTokensAsErrors = false;
-        cmd.SetAction(async (parse, _) =>
+        // Synchronous, so that Ctrl+C reaches our handler (exit 130 after the script stops) rather than
+        // System.CommandLine's own process-termination timer.
+        cmd.SetAction(parse =>
         {
             using var interrupt = new CancellationTokenSource();
             void OnCancel(object? sender, ConsoleCancelEventArgs e)
@@ -27,7 +29,7 @@ internal static class RunCommand
             {
                 var path = parse.GetValue(file)!.FullName;
                 var scriptArgs = parse.GetValue(args) ?? [];
-                return await ScriptRunner.RunAsync(path, scriptArgs, Console.Out, Console.Error, interrupt.Token);
+                return ScriptRunner.RunAsync(path, scriptArgs, Console.Out, Console.Error, interrupt.Token).GetAwaiter().GetResult();
             }
             finally
             {

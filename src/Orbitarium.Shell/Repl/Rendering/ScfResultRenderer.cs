@@ -105,7 +105,7 @@ public static class ScfResultRenderer
             table.AddRow(cells.Select(c => new Text(c)).ToArray<IRenderable>());
         }
         string caption = string.Create(CultureInfo.InvariantCulture,
-            $"orbitals {first + 1}–{last + 1} of {n} (Settings.OrbitalsAroundGap = {around}); all energies: OrbitalEnergiesAlphaHartree");
+            $"orbitals {first + 1}–{last + 1} of {n}");
         table.Caption(new TableTitle(caption, new Style(Color.Grey)));
         return table;
     }

@@ -1,6 +1,5 @@
 using System.Diagnostics;
 using BenchmarkDotNet.Attributes;
-using BenchmarkDotNet.Engines;
 
 namespace Orbitarium.Benchmarks.Shell;
 
@@ -9,7 +8,7 @@ namespace Orbitarium.Benchmarks.Shell;
 /// console prints its banner and prompt, reads end-of-input and leaves: the measured time is process start,
 /// runtime start-up, banner and first prompt, plus the exit.
 /// </summary>
-[SimpleJob(RunStrategy.Monitoring, launchCount: 1, warmupCount: 1, iterationCount: 5)]
+[Config(typeof(ConsoleBenchmarkConfigs.ProcessLaunches))]
 public class ConsoleStartupBenchmarks
 {
     private string _executable = "";

@@ -5,7 +5,7 @@ using Spectre.Console;
 namespace Orbitarium.Benchmarks.Shell;
 
 /// <summary>One simple expression at a warm prompt: parse, compile against the session, run, render.</summary>
-[ShortRunJob]
+[Config(typeof(ConsoleBenchmarkConfigs.ShortInProcess))]
 public class SimpleExpressionBenchmarks
 {
     private ReplSession _session = null!;

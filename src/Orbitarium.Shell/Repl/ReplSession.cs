@@ -208,6 +208,7 @@ public sealed partial class ReplSession
             return new SubmissionResult(SubmissionStatus.Cancelled, null, false, elapsed, message);
         }
 
+        if (_live.Count > 0) _console.MarkupLine($"[grey]{_live.Count} SCF iteration(s)[/]");
         var newState = run.Result;
         lock (_gate)
         {
@@ -231,7 +232,6 @@ public sealed partial class ReplSession
                 // The submission runs an SCF with Progress: show its iterations live until it ends or Ctrl+C.
                 await _live.ShowUntilAsync(_console, Task.WhenAny(run, interrupted.Task)).ConfigureAwait(false);
                 first = run.IsCompleted ? run : interrupted.Task;
-                if (first == run) _console.MarkupLine($"[grey]{_live.Count} SCF iteration(s)[/]");
             }
             if (first == run) return WaitOutcome.Completed;
         }

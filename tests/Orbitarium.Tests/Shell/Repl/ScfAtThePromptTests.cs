@@ -1,0 +1,57 @@
+using System.Diagnostics;
+using Orbitarium.Shell.Repl;
+
+namespace Orbitarium.Tests.Shell.Repl;
+
+public class ScfAtThePromptTests
+{
+    [Fact]
+    public async Task An_RHF_result_renders_as_a_summary_panel_with_an_orbital_table()
+    {
+        var output = new StringWriter();
+        var session = TestConsoles.Session(output, TestConsoles.RepositoryRoot());
+        // User code resolves files against the process folder; the test gives a full path.
+        string xyz = Path.Combine(TestConsoles.RepositoryRoot(), "examples", "tg1-water.xyz");
+        await session.SubmitAsync($"var water = Molecule.FromXyzFile(@\"{xyz}\");");
+
+        var result = await session.SubmitAsync("water.WithBasis(\"STO-3G\").RunRhf(Progress, Token)");
+
+        string text = output.ToString();
+        Assert.True(result.Status == SubmissionStatus.Accepted, text);
+        Assert.Contains("RHF/STO-3G · H2O", text);
+        Assert.Contains("converged", text);
+        // Water RHF/STO-3G near the experimental geometry: -74.963 Eh (from memory); the panel prints 10 decimals.
+        Assert.Contains("-74.963", text);
+        Assert.Contains("HOMO", text);
+        Assert.Contains("LUMO", text);
+        Assert.Contains("SCF iteration(s)", text);
+    }
+
+    [Fact]
+    public async Task Ctrl_C_during_an_SCF_on_a_102_function_molecule_returns_within_a_second_with_the_session_intact()
+    {
+        // Given TG-B benzene in 6-31G* (102 Cartesian functions) running RHF at the prompt
+        var output = new StringWriter();
+        var session = TestConsoles.Session(output, TestConsoles.RepositoryRoot());
+        string xyz = Path.Combine(TestConsoles.RepositoryRoot(), "examples", "tgb-benzene.xyz");
+        await session.SubmitAsync($"var benzene = Molecule.FromXyzFile(@\"{xyz}\");");
+        await session.SubmitAsync("var setup = benzene.WithBasis(\"6-31G*\");");
+        Assert.Equal(102, (await session.SubmitAsync("setup.Basis.FunctionCount")).Value);
+        using var ctrlC = new CancellationTokenSource();
+        var running = session.SubmitAsync("var result = setup.RunRhf(Progress, Token);", ctrlC.Token);
+        await Task.Delay(1500);
+        Assert.False(running.IsCompleted, "the SCF finished before it could be cancelled");
+
+        // When Ctrl+C is pressed
+        var watch = Stopwatch.StartNew();
+        await ctrlC.CancelAsync();
+        var outcome = await running;
+        watch.Stop();
+
+        // Then control returns within a second and earlier variables are intact
+        Assert.True(watch.Elapsed < TimeSpan.FromSeconds(1), $"took {watch.Elapsed}");
+        Assert.Contains(outcome.Status, new[] { SubmissionStatus.Cancelled, SubmissionStatus.Abandoned });
+        Assert.Equal("C6H6", (await session.SubmitAsync("benzene.Formula")).Value);
+        Assert.Equal(SubmissionStatus.CompileError, (await session.SubmitAsync("result")).Status);
+    }
+}

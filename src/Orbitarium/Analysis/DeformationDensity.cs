@@ -1,6 +1,4 @@
 using MathNet.Numerics.LinearAlgebra;
-using Orbitarium.BasisSets;
-using Orbitarium.Chemistry;
 using Orbitarium.Scf;
 
 namespace Orbitarium.Analysis;
@@ -52,27 +50,16 @@ public static class DeformationDensity
         {
             var indices = Enumerable.Range(0, basis.FunctionCount).Where(mu => basis.FunctionAtoms[mu] == a).ToArray();
             var shells = basis.Shells.Where(s => s.AtomIndex == a).ToList();
-            string key = molecule.Atoms[a].Symbol + "|" + string.Join(";", shells.Select(s => $"{s.AngularMomentum}:{s.IsPure}:{string.Join(",", s.Exponents)}:{string.Join(",", s.Definition.Coefficients)}"));
+            string key = molecule.Atoms[a].Symbol + "|" + string.Join(";", shells.Select(s =>
+                $"{s.AngularMomentum}:{s.IsPure}:{string.Join(",", s.Exponents)}:{string.Join(",", s.Definition.Coefficients)}"));
             if (!cache.TryGetValue(key, out var density))
             {
-                density = FreeAtomDensity(molecule.Atoms[a].Element, shells, result.Options, cancellationToken);
+                var atom = FreeAtom.Compute(result, a, cancellationToken);
+                density = SphericalAtom.Average(atom.Basis, atom.DensityTotal);
                 cache[key] = density;
             }
             list.Add((a, density, indices));
         }
         return list;
-    }
-
-    private static Matrix<double> FreeAtomDensity(Element element, IReadOnlyList<Shell> shells, ScfOptions moleculeOptions, CancellationToken cancellationToken)
-    {
-        int multiplicity = FreeAtomMultiplicity.Of(element.AtomicNumber);
-        var atom = Molecule.Empty.AddAtom(new Atom(element, Vector3D.Zero)).WithMultiplicity(multiplicity);
-        var atomBasis = MolecularBasis.FromShells(atom, shells.Select(s => new Shell(s.Definition, Vector3D.Zero, 0, s.IsPure)), "free atom");
-        var options = moleculeOptions with { Guess = ScfGuess.AtomicDensities, InitialOrbitals = null, BreakSpinSymmetry = false };
-        var reference = multiplicity == 1 ? ScfReference.Restricted : ScfReference.Unrestricted;
-        var r = SelfConsistentField.Run(atomBasis, reference, options, null, cancellationToken);
-        if (!r.Converged)
-            throw new OrbitariumInputException($"The free {element.Name} atom's SCF did not converge ({r.StopReason}); the deformation density needs it. Try more iterations or damping in the options.");
-        return SphericalAtom.Average(atomBasis, r.DensityTotal);
     }
 }

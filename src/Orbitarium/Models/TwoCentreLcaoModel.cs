@@ -17,7 +17,7 @@ namespace Orbitarium.Models;
 /// Dₑ = 2.79 eV, are in <see cref="HydrogenMolecularIonExact"/>.</para>
 /// <para>Geometry of the spatial functions: nucleus A at (0, 0, −R/2), nucleus B at (0, 0, +R/2), in bohr.</para>
 /// </remarks>
-public sealed class TwoCentreLcaoModel
+public sealed partial class TwoCentreLcaoModel
 {
     /// <summary>Smallest exponent the optimiser tries (bohr⁻¹).</summary>
     public const double MinimumExponent = 0.2;

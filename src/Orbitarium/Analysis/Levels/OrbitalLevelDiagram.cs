@@ -73,7 +73,7 @@ public static class OrbitalLevelDiagram
 
         var molLevels = new List<EnergyLevel>();
         var molIndex = new List<int>();
-        var compositions = Composition(molecule, spin);
+        var compositions = Composition(molecule, spin, null, molecule.Molecule);
         for (int k = 0; k < energies.Count; k++)
         {
             if (energies[k] < lo || energies[k] > hi) continue;
@@ -97,7 +97,7 @@ public static class OrbitalLevelDiagram
             var f = fragments[fi];
             var (cf, occf) = ScfFields.Orbitals(f, spin);
             var ef = Energies(f, spin);
-            var compF = Composition(f, spin);
+            var compF = Composition(f, spin, fragmentAtoms[fi], molecule.Molecule);
             var levels = new List<EnergyLevel>();
             var fIndex = new List<int>();
             for (int k = 0; k < ef.Count; k++)
@@ -119,7 +119,7 @@ public static class OrbitalLevelDiagram
                     if (o * o >= connectionThreshold) connections.Add(new LevelConnection(column, li, mi, o * o));
                 }
             }
-            columns.Add(new LevelColumn(FragmentTitle(f.Molecule), levels));
+            columns.Add(new LevelColumn(FragmentTitle(molecule.Molecule, fragmentAtoms[fi]), levels));
         }
         columns.Insert(1, new LevelColumn(molecule.Molecule.Formula, molLevels));
         string spinText = molecule.Reference == ScfReference.Unrestricted ? (spin == OrbitalSpin.Alpha ? " (α)" : " (β)") : "";
@@ -129,7 +129,7 @@ public static class OrbitalLevelDiagram
     private static IReadOnlyList<double> Energies(ScfResult r, OrbitalSpin spin) =>
         r.Reference == ScfReference.Unrestricted && spin == OrbitalSpin.Beta ? r.OrbitalEnergiesBetaHartree : r.OrbitalEnergiesAlphaHartree;
 
-    private static string[] Composition(ScfResult r, OrbitalSpin spin)
+    private static string[] Composition(ScfResult r, OrbitalSpin spin, int[]? atomMap, Molecule labels)
     {
         bool beta = r.Reference == ScfReference.Unrestricted && spin == OrbitalSpin.Beta;
         var list = new string[r.OrbitalCount];
@@ -139,14 +139,14 @@ public static class OrbitalLevelDiagram
             var main = m.Contributions.Where(x => x.Fraction >= 0.15).Take(3).ToList();
             if (main.Count == 0 && m.Contributions.Length > 0) main.Add(m.Contributions[0]);
             list[k] = string.Join(" + ", main.Select(x => string.Create(CultureInfo.InvariantCulture,
-                $"{Label(r.Molecule, x.AtomIndex)} {BasisSets.AngularMomentum.Letter(x.AngularMomentum)}{(main.Count > 1 ? $" {100 * x.Fraction:F0}%" : "")}")));
+                $"{Label(labels, atomMap is null ? x.AtomIndex : atomMap[x.AtomIndex])} {BasisSets.AngularMomentum.Letter(x.AngularMomentum)}{(main.Count > 1 ? $" {100 * x.Fraction:F0}%" : "")}")));
         }
         return list;
     }
 
     private static string Label(Molecule m, int atom) => $"{m.Atoms[atom].Symbol}{atom + 1}";
 
-    private static string FragmentTitle(Molecule m) => m.AtomCount == 1 ? m.Atoms[0].Symbol : m.Formula;
+    private static string FragmentTitle(Molecule molecule, int[] atoms) => string.Join(" ", atoms.Select(a => Label(molecule, a)));
 
     /// <summary>For each fragment atom, the matching molecule atom (same element, same position within 1e-4 bohr).</summary>
     private static int[] AtomMap(Molecule molecule, Molecule fragment)

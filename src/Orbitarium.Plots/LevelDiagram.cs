@@ -50,18 +50,22 @@ public static class LevelDiagram
                 int electrons = (int)Math.Round(level.Occupation);
                 for (int e = 0; e < electrons; e++)
                     plot.Add.Marker(x + (electrons == 1 ? 0 : (e == 0 ? -0.04 : 0.04)), level.EnergyHartree, MarkerShape.FilledCircle, 8, Colors.Black);
+                bool firstOfGroup = li == 0 || groups[li] == 1 || offsets[li - 1] >= offsets[li];
+                if (!firstOfGroup) continue;
+                string text = groups[li] > 1 ? $"{level.Label} (×{groups[li]})" : level.Label;
                 if (ci == data.MoleculeColumn || data.Columns.Count == 1)
                 {
-                    var t = plot.Add.Text(level.Label, xs[ci] + HalfWidth + 0.02, level.EnergyHartree);
+                    var t = plot.Add.Text(text, xs[ci] + HalfWidth + 0.02, level.EnergyHartree);
                     t.LabelFontSize = 11;
                     t.LabelFontColor = color;
                     t.LabelAlignment = Alignment.MiddleLeft;
                 }
                 else
                 {
-                    var t = plot.Add.Text(level.Label, x + (ci < data.MoleculeColumn ? -w - 0.02 : w + 0.02), level.EnergyHartree);
+                    bool left = ci < data.MoleculeColumn;
+                    var t = plot.Add.Text(text, xs[ci] + (left ? -HalfWidth - 0.02 : HalfWidth + 0.02), level.EnergyHartree);
                     t.LabelFontSize = 11;
-                    t.LabelAlignment = ci < data.MoleculeColumn ? Alignment.MiddleRight : Alignment.MiddleLeft;
+                    t.LabelAlignment = left ? Alignment.MiddleRight : Alignment.MiddleLeft;
                 }
             }
         }

@@ -29,6 +29,7 @@ public static class ScriptEnvironment
         "Orbitarium.Integrals",
         "Orbitarium.Scf",
         "Orbitarium.Analysis",
+        "Orbitarium.Models",
         "Orbitarium.Correlation",
         "Orbitarium.Dft",
         "Orbitarium.Geometry",

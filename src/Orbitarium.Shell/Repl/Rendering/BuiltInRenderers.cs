@@ -14,5 +14,6 @@ internal static class BuiltInRenderers
         registry.Register<Vector<double>>(MatrixRenderer.RenderVector);
         registry.Register<MolecularBasis>(MolecularBasisRenderer.Render);
         registry.Register<Orbitarium.Scf.ScfResult>(ScfResultRenderer.Render);
+        registry.Register<Orbitarium.Plots.PlotFile>(PlotFileRenderer.Render);
     }
 }

@@ -1,0 +1,48 @@
+using System.Xml.Linq;
+using Orbitarium.Analysis;
+using Orbitarium.Chemistry;
+using Orbitarium.Tests.Plots;
+
+namespace Orbitarium.Tests.Analysis;
+
+public class VtkImageDataTests
+{
+    [Fact]
+    public void Writes_well_formed_image_data_with_the_atoms()
+    {
+        using var dir = new PlotTestFolder();
+        var r = AnalysisSystems.DihydrogenRhfSto3g;
+        var box = BoxGrid.AroundMolecule(r.Molecule, 1.0, 0.25);
+        var rho = ScfFields.Density(r, box);
+        var path = VtkImageData.Write(dir.File("h2.vti"), rho, ScfFields.Orbital(r, 1, box));
+        // VTK XML ImageData layout (Kitware, "VTK File Formats").
+        var doc = XDocument.Load(path);
+        var image = doc.Root!.Element("ImageData")!;
+        Assert.Equal("ImageData", doc.Root.Attribute("type")!.Value);
+        Assert.Equal($"0 {box.CountX - 1} 0 {box.CountY - 1} 0 {box.CountZ - 1}", image.Attribute("WholeExtent")!.Value);
+        var arrays = image.Descendants("DataArray").ToList();
+        Assert.Equal("1 1", string.Join(" ", arrays.Single(a => a.Attribute("Name")!.Value == "AtomicNumbers").Value.Split([' ', '\n'], StringSplitOptions.RemoveEmptyEntries)));
+        var values = arrays.Single(a => a.Attribute("Name")!.Value == "electron_density").Value.Split([' ', '\n'], StringSplitOptions.RemoveEmptyEntries);
+        Assert.Equal(box.PointCount, values.Length);
+        Assert.Empty(Directory.GetFiles(dir.Path, "*.tmp"));
+    }
+
+    [Fact]
+    public void A_field_on_a_plane_is_refused()
+    {
+        var m = AnalysisSystems.Dihydrogen(0.74);
+        var plane = PlaneGrid.ContainingBond(m, 0, 1);
+        var f = new GridField(plane, m, new double[plane.PointCount], "zero", "", false);
+        Assert.Throws<OrbitariumInputException>(() => VtkImageData.Write("x.vti", f));
+    }
+
+    [Fact]
+    public void An_unwritable_path_gives_a_clear_message_and_leaves_nothing()
+    {
+        var m = AnalysisSystems.Dihydrogen(0.74);
+        var box = BoxGrid.AroundMolecule(m, 0.5, 0.5);
+        var f = new GridField(box, m, new double[box.PointCount], "zero", "", false);
+        var e = Assert.Throws<OrbitariumInputException>(() => VtkImageData.Write("/nonexistent-folder-xyz/a.vti", f));
+        Assert.Contains("does not exist", e.Message);
+    }
+}

@@ -1,0 +1,95 @@
+namespace Orbitarium.Scf;
+
+/// <summary>
+/// Settings of a self-consistent-field run. Immutable: change a value with a <c>with</c> expression,
+/// e.g. <c>ScfOptions.Default with { MaxIterations = 200, Damping = 0.3 }</c>.
+/// </summary>
+/// <remarks>The defaults follow common practice: Pulay DIIS on the commutator FDS − SDF with 8 vectors,
+/// convergence when |ΔE| &lt; 1e-10 Eh and max|FDS − SDF| &lt; 1e-8, a superposition-of-atomic-densities guess,
+/// symmetric orthogonalisation with a switch to canonical below an overlap eigenvalue of 1e-7.</remarks>
+public sealed record ScfOptions
+{
+    /// <summary>The defaults described on the type.</summary>
+    public static ScfOptions Default { get; } = new();
+
+    /// <summary>Largest number of iterations before giving up (the result is then flagged not converged). Default 128.</summary>
+    public int MaxIterations { get; init; } = 128;
+
+    /// <summary>Convergence threshold on the energy change between iterations, hartree. Default 1e-10 Eh.</summary>
+    public double EnergyThresholdHartree { get; init; } = 1e-10;
+
+    /// <summary>Convergence threshold on the largest element of FDS − SDF in the orthonormal basis, hartree. Default 1e-8.</summary>
+    public double CommutatorThreshold { get; init; } = 1e-8;
+
+    /// <summary>Number of Fock/error pairs kept by Pulay DIIS; 0 turns DIIS off. Default 8.</summary>
+    public int DiisSubspaceSize { get; init; } = 8;
+
+    /// <summary>Density damping factor d in [0, 1): the next density is (1 − d)·D_new + d·D_old. Helps oscillating
+    /// cases at the price of slower convergence. Default 0 (off).</summary>
+    public double Damping { get; init; }
+
+    /// <summary>Level shift in hartree added to virtual orbital energies (half of it to singly occupied ROHF orbitals);
+    /// stabilises difficult cases (Saunders &amp; Hillier, Int. J. Quantum Chem. 7, 699 (1973)). Default 0 (off).</summary>
+    public double LevelShiftHartree { get; init; }
+
+    /// <summary>The starting guess. Default <see cref="ScfGuess.AtomicDensities"/>; becomes
+    /// <see cref="ScfGuess.PreviousOrbitals"/> through <see cref="WithInitialOrbitals"/>.</summary>
+    public ScfGuess Guess { get; init; } = ScfGuess.AtomicDensities;
+
+    /// <summary>Orbitals to start from when <see cref="Guess"/> is <see cref="ScfGuess.PreviousOrbitals"/>.</summary>
+    public ScfResult? InitialOrbitals { get; init; }
+
+    /// <summary>UHF only: mix the α HOMO and LUMO of the guess by 45° so that a singlet can break spin symmetry
+    /// (common practice). Default false.</summary>
+    public bool BreakSpinSymmetry { get; init; }
+
+    /// <summary>How the AO basis is orthogonalised. Default <see cref="OrthogonalizationKind.Symmetric"/>.</summary>
+    public OrthogonalizationKind Orthogonalization { get; init; } = OrthogonalizationKind.Symmetric;
+
+    /// <summary>Overlap eigenvalues below this are treated as linear dependencies and dropped (canonical
+    /// orthogonalisation). Default 1e-7 (common practice).</summary>
+    public double LinearDependencyThreshold { get; init; } = 1e-7;
+
+    /// <summary>Memory the two-electron integrals may occupy in core, bytes; larger problems run integral-direct.
+    /// Default 2 GiB.</summary>
+    public long MemoryBudgetBytes { get; init; } = 2L * 1024 * 1024 * 1024;
+
+    /// <summary>Always recompute the two-electron integrals each iteration (integral-direct), whatever the memory budget. Default false.</summary>
+    public bool ForceDirect { get; init; }
+
+    /// <summary>The exchange–correlation functional for Kohn–Sham DFT, or null for Hartree–Fock (the default).
+    /// The driver adds V_xc and E_xc and scales exact exchange by the functional's
+    /// <see cref="IExchangeCorrelationPotential.ExactExchangeFraction"/>.</summary>
+    public IExchangeCorrelationPotential? ExchangeCorrelation { get; init; }
+
+    /// <summary>Returns options that start from <paramref name="previous"/>'s orbitals (for scans and restarts).</summary>
+    public ScfOptions WithInitialOrbitals(ScfResult previous)
+    {
+        ArgumentNullException.ThrowIfNull(previous);
+        return this with { Guess = ScfGuess.PreviousOrbitals, InitialOrbitals = previous };
+    }
+
+    /// <summary>Checks every value and throws a clear message for the first bad one.</summary>
+    /// <exception cref="OrbitariumInputException">A value is out of its range.</exception>
+    public void Validate()
+    {
+        if (MaxIterations < 1)
+            throw new OrbitariumInputException($"MaxIterations is {MaxIterations}; give at least 1.");
+        if (!(EnergyThresholdHartree > 0) || !double.IsFinite(EnergyThresholdHartree))
+            throw new OrbitariumInputException($"EnergyThresholdHartree is {EnergyThresholdHartree}; give a positive number of hartree (default 1e-10).");
+        if (!(CommutatorThreshold > 0) || !double.IsFinite(CommutatorThreshold))
+            throw new OrbitariumInputException($"CommutatorThreshold is {CommutatorThreshold}; give a positive number (default 1e-8).");
+        if (DiisSubspaceSize < 0 || DiisSubspaceSize > 64)
+            throw new OrbitariumInputException($"DiisSubspaceSize is {DiisSubspaceSize}; give 0 (off) to 64 (default 8).");
+        if (!(Damping >= 0 && Damping < 1))
+            throw new OrbitariumInputException($"Damping is {Damping}; give a factor in [0, 1) (0 is off).");
+        if (!(LevelShiftHartree >= 0) || !double.IsFinite(LevelShiftHartree))
+            throw new OrbitariumInputException($"LevelShiftHartree is {LevelShiftHartree}; give a non-negative number of hartree (0 is off).");
+        if (!(LinearDependencyThreshold > 0 && LinearDependencyThreshold < 1))
+            throw new OrbitariumInputException($"LinearDependencyThreshold is {LinearDependencyThreshold}; give an overlap eigenvalue in (0, 1) (default 1e-7).");
+        if (MemoryBudgetBytes < 0)
+            throw new OrbitariumInputException($"MemoryBudgetBytes is {MemoryBudgetBytes}; give a non-negative number of bytes.");
+        if (Guess == ScfGuess.PreviousOrbitals && InitialOrbitals is null)
+            throw new OrbitariumInputException("Guess is PreviousOrbitals but no InitialOrbitals were given; use options.WithInitialOrbitals(previousResult).");
+    }
+}

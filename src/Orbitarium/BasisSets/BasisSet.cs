@@ -9,7 +9,7 @@ namespace Orbitarium.BasisSets;
 /// </summary>
 /// <remarks>Immutable; <c>With…</c> methods return new sets. Place it on a molecule with
 /// <see cref="MolecularBasis.Create(Molecule, BasisSet, bool?)"/>.</remarks>
-public sealed class BasisSet
+public sealed partial class BasisSet
 {
     private readonly ImmutableDictionary<int, ImmutableArray<ShellDefinition>> _shells;
 

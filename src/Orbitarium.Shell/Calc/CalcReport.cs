@@ -93,7 +93,8 @@ internal sealed class CalcReport
         var m = Request.Molecule;
         var o = scf.Options;
         var sb = new StringBuilder();
-        sb.Append(C, $"{Outcome.MethodLabel}/{Request.BasisName}  {m.Formula}  {(m.Title.Length > 0 ? "— " + m.Title : "")}\n".TrimEnd() + "\n");
+        string title = m.Title.Length > 0 ? "  — " + m.Title : "";
+        sb.Append(C, $"{Outcome.MethodLabel}/{Request.BasisName}  {m.Formula}{title}\n");
         sb.Append(C, $"  basis functions {scf.Basis.FunctionCount}   electrons {m.ElectronCount} (α {m.AlphaElectronCount}, β {m.BetaElectronCount})   charge {m.Charge}   multiplicity {m.Multiplicity}\n");
         sb.Append(C, $"  two-electron integrals: {scf.IntegralMode}");
         if (scf.DroppedLinearDependencies > 0) sb.Append(C, $"; {scf.DroppedLinearDependencies} near-linear dependencies dropped");

@@ -1,3 +1,4 @@
+using System.Diagnostics;
 using MathNet.Numerics.LinearAlgebra;
 using Orbitarium.BasisSets;
 using Orbitarium.Integrals;
@@ -14,9 +15,12 @@ internal sealed class ScfIntegrals
 
     public static ScfIntegrals Compute(MolecularBasis basis, long memoryBudgetBytes, bool forceDirect, CancellationToken cancellationToken)
     {
-        // Wired to OneElectronIntegrals and CoulombExchangeKernel when the integral engine lands.
-        _ = basis; _ = memoryBudgetBytes; _ = forceDirect;
+        var clock = Stopwatch.StartNew();
+        var s = OneElectronIntegrals.Overlap(basis);
         cancellationToken.ThrowIfCancellationRequested();
-        throw new NotSupportedException("The integral engine is not merged into this branch yet.");
+        var h = OneElectronIntegrals.CoreHamiltonian(basis);
+        cancellationToken.ThrowIfCancellationRequested();
+        var kernel = CoulombExchangeKernel.Create(basis, memoryBudgetBytes, forceDirect, null, cancellationToken);
+        return new ScfIntegrals { Overlap = s, CoreHamiltonian = h, Kernel = kernel, Seconds = clock.Elapsed.TotalSeconds };
     }
 }

@@ -72,7 +72,7 @@ public static class SuperpositionOfAtomicDensities
         var fock = ints.CoreHamiltonian;
         var density = Matrix<double>.Build.Dense(n, n);
         var diis = new Diis(6);
-        for (int iteration = 0; iteration < 60; iteration++)
+        for (int iteration = 0; iteration < 40; iteration++)
         {
             cancellationToken.ThrowIfCancellationRequested();
             var fo = x.TransposeThisAndMultiply(fock) * x;
@@ -103,7 +103,7 @@ public static class SuperpositionOfAtomicDensities
             }
             double change = (next - density).InfinityNorm();
             density = next;
-            if (change < 1e-6) break;
+            if (change < 1e-5) break; // a guess needs no more
             var jk = ints.Kernel.Build([density], true, cancellationToken);
             fock = ints.CoreHamiltonian + jk.Coulomb[0] - jk.Exchange![0].Multiply(0.5);
             var fds = fock * density * ints.Overlap;

@@ -16,7 +16,7 @@ public sealed class MolecularGrid
     public const int MaxBatchSize = 256;
 
     /// <summary>Edge of the cubes points are binned into before batching, bohr.</summary>
-    public const double BatchCubeEdgeBohr = 2.5;
+    public const double BatchCubeEdgeBohr = 4.0;
 
     private readonly Vector3D[] _points;
     private readonly double[] _weights;

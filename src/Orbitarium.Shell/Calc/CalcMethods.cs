@@ -13,11 +13,12 @@ internal static class CalcMethods
         new HartreeFockCalcMethod(ScfReference.Restricted),
         new HartreeFockCalcMethod(ScfReference.Unrestricted),
         new HartreeFockCalcMethod(ScfReference.RestrictedOpenShell),
+        .. KohnShamCalcMethod.All,
     ];
 
     /// <summary>Extra command-line options some methods read through <see cref="CalcRequest.ParseResult"/>
     /// (add one line per option, e.g. a grid size for DFT).</summary>
-    public static readonly IReadOnlyList<Option> ExtraOptions = [];
+    public static readonly IReadOnlyList<Option> ExtraOptions = [KohnShamCalcMethod.GridOption];
 
     /// <summary>The method called <paramref name="name"/> (case-insensitive).</summary>
     /// <exception cref="OrbitariumInputException">No method has that name.</exception>

@@ -36,7 +36,14 @@ internal sealed class CalcReport
         var m = Request.Molecule;
         var json = new JsonObject
         {
-            ["method"] = Outcome.MethodLabel.ToLowerInvariant(),
+            ["method"] = Request.MethodName,
+            ["method_label"] = Outcome.MethodLabel,
+            ["reference"] = scf.Reference switch
+            {
+                ScfReference.Restricted => "restricted",
+                ScfReference.Unrestricted => "unrestricted",
+                _ => "restricted-open-shell",
+            },
             ["basis"] = Request.BasisName,
             ["n_basis"] = scf.Basis.FunctionCount,
             ["n_electrons"] = m.ElectronCount,

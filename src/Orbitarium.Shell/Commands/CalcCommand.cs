@@ -8,7 +8,7 @@ namespace Orbitarium.Shell.Commands;
 
 /// <summary>
 /// <c>orbitarium calc --geometry FILE.xyz --basis NAME --method NAME [--charge N] [--multiplicity M]
-/// [--units angstrom|bohr] [--json] [--output FILE] [--max-iterations N]</c>: one calculation, a readable summary or
+/// [--units angstrom|bohr] [--json] [--output FILE] [--max-iterations N] [--task energy|optimize|frequencies]</c>: one calculation, a readable summary or
 /// one JSON object. Exit codes: 0 success, 2 bad input (one line on stderr), 3 a solver did not converge.
 /// Methods come from <see cref="CalcMethods.All"/>.
 /// </summary>
@@ -51,6 +51,8 @@ internal static class CalcCommand
         foreach (var o in new Option[] { Geometry, Basis, Method, Charge, Multiplicity, Units, Json, Output, MaxIterations })
             cmd.Options.Add(o);
         foreach (var o in CalcMethods.ExtraOptions) cmd.Options.Add(o);
+        foreach (var o in new Option[] { GeometryCalcTask.Task, GeometryCalcTask.Temperature, GeometryCalcTask.Pressure, GeometryCalcTask.MaxSteps })
+            cmd.Options.Add(o);
         cmd.SetAction((parse, ct) => Task.FromResult(Execute(parse, Console.Out, Console.Error, ct)));
         return cmd;
     }
@@ -96,10 +98,21 @@ internal static class CalcCommand
                 Timings = timings,
                 ParseResult = parse,
             };
-            var outcome = method.Run(request, cancellationToken);
+            string task = GeometryCalcTask.Parse(parse);
+            CalcOutcome outcome;
+            string? geometryXyz = null;
+            if (task == "energy") outcome = method.Run(request, cancellationToken);
+            else (request, outcome, geometryXyz) = GeometryCalcTask.Run(task, method, request, cancellationToken);
             var report = new CalcReport(request, outcome);
             string text = parse.GetValue(Json) ? report.ToJsonText() : report.ToText();
-            if (parse.GetValue(Output) is { Length: > 0 } path) AtomicFile.WriteAllText(path, text);
+            string? path = parse.GetValue(Output);
+            if (geometryXyz is not null && path is { Length: > 0 } && path.EndsWith(".xyz", StringComparison.OrdinalIgnoreCase))
+            {
+                // --task optimize --output FILE.xyz: the optimised geometry goes to the file, the report to stdout.
+                AtomicFile.WriteAllText(path, geometryXyz);
+                output.Write(text);
+            }
+            else if (path is { Length: > 0 }) AtomicFile.WriteAllText(path, text);
             else output.Write(text);
             if (!outcome.Converged)
             {
@@ -107,6 +120,11 @@ internal static class CalcCommand
                 return NotConverged;
             }
             return Success;
+        }
+        catch (Orbitarium.Geometry.ScfConvergenceException e)
+        {
+            error.WriteLine($"calc: {OneLine(e.Message)}");
+            return NotConverged;
         }
         catch (OrbitariumInputException e)
         {

@@ -88,7 +88,10 @@ public static class BasisSetLibrary
                 }
             });
         }
-        return new Catalogue(byKey.ToFrozenDictionary(StringComparer.Ordinal), names, loaders.ToFrozenDictionary(StringComparer.Ordinal));
+        // Present the sets from small to large; sets not in this list follow in file order.
+        string[] preferred = ["STO-3G", "STO-6G", "3-21G", "6-31G", "6-31G*", "6-31G**", "6-311G**", "cc-pVDZ", "cc-pVTZ"];
+        var ordered = names.OrderBy(n => Array.IndexOf(preferred, n) is int i && i >= 0 ? i : preferred.Length).ToList();
+        return new Catalogue(byKey.ToFrozenDictionary(StringComparer.Ordinal), ordered, loaders.ToFrozenDictionary(StringComparer.Ordinal));
     }
 
     private static (string Name, List<string> Aliases) ReadHeader(string text, string resource)

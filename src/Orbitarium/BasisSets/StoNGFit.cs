@@ -228,12 +228,12 @@ public static class StoNGFit
             var g = new double[n];
             double e = Evaluate(x, g);
             var H = Identity(n, 0.1);
-            int it;
+            int it, stalls = 0;
             for (it = 0; it < 500; it++)
             {
                 double gn = 0;
                 foreach (double v in g) gn += v * v;
-                if (Math.Sqrt(gn) < 1e-14) break;
+                if (Math.Sqrt(gn) < 1e-12) break;
                 var d = new double[n];
                 for (int i = 0; i < n; i++)
                     for (int j = 0; j < n; j++) d[i] -= H[i, j] * g[j];
@@ -248,7 +248,7 @@ public static class StoNGFit
                 var xn = new double[n];
                 var gnw = new double[n];
                 double en = double.PositiveInfinity;
-                for (int ls = 0; ls < 60; ls++)
+                for (int ls = 0; ls < 40; ls++)
                 {
                     for (int i = 0; i < n; i++) xn[i] = x[i] + step * d[i];
                     en = Evaluate(xn, gnw);
@@ -270,9 +270,9 @@ public static class StoNGFit
                         for (int j = 0; j < n; j++)
                             H[i, j] += ((sy + yhy) * sv[i] * sv[j] / (sy * sy)) - (hy[i] * sv[j] + sv[i] * hy[j]) / sy;
                 }
-                bool tiny = Math.Abs(e - en) < 1e-17;
+                stalls = e - en < 1e-15 * Math.Max(e, 1e-12) ? stalls + 1 : 0;
                 x = xn; e = en; Array.Copy(gnw, g, n);
-                if (tiny && step < 1e-6) break;
+                if (stalls >= 3) break;
             }
             return (x, e, it);
         }

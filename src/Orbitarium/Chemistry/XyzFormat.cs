@@ -30,7 +30,15 @@ public static class XyzFormat
             if (string.IsNullOrWhiteSpace(line))
                 throw new OrbitariumInputException(
                     $"blank line where atom {atoms.Count + 1} of {count} was expected; the count line says {count} atoms.", lineIndex + 1);
-            atoms.Add(ParseAtomLine(line, lineIndex + 1, f));
+            var atom = ParseAtomLine(line, lineIndex + 1, f);
+            for (int j = 0; j < atoms.Count; j++)
+            {
+                double d = Vector3D.Distance(atom.PositionBohr, atoms[j].PositionBohr) * PhysicalConstants.AngstromPerBohr;
+                if (d < Molecule.MinimumNuclearSeparationAngstrom)
+                    throw new OrbitariumInputException(FormattableString.Invariant(
+                        $"atom {atoms.Count + 1} ({atom.Symbol}) is {d:F4} Å from atom {j + 1} ({atoms[j].Symbol}) on line {first + 3 + j}, closer than {Molecule.MinimumNuclearSeparationAngstrom} Å; check the coordinates and their unit."), lineIndex + 1);
+            }
+            atoms.Add(atom);
         }
         if (atoms.Count < count)
             throw new OrbitariumInputException(

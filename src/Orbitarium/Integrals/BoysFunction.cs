@@ -32,8 +32,6 @@ public static class BoysFunction
     // Row k holds F_0..F_{TableOrders−1} at T_k = k·GridStep.
     private static readonly double[] Table = BuildTable();
 
-    private static readonly double[] InverseFactorial = [1.0, 1.0, 1.0 / 2, 1.0 / 6, 1.0 / 24, 1.0 / 120, 1.0 / 720, 1.0 / 5040];
-
     private static readonly double[] InverseOddNumber = BuildInverseOdd();
 
     /// <summary>F_m(T) for a single order.</summary>
@@ -64,31 +62,41 @@ public static class BoysFunction
     }
 
     /// <summary>The hot-path form without argument checks (0 ≤ maxOrder ≤ MaxOrder, finite t ≥ 0).</summary>
-    internal static void EvaluateUnchecked(int maxOrder, double t, Span<double> values)
+    internal static unsafe void EvaluateUnchecked(int maxOrder, double t, Span<double> values)
+    {
+        fixed (double* v = values) EvaluateUnchecked(maxOrder, t, v);
+    }
+
+    /// <summary>The hot-path form writing through a pointer (room for maxOrder + 1 values).</summary>
+    internal static unsafe void EvaluateUnchecked(int maxOrder, double t, double* values)
     {
         if (t < AsymptoticThreshold)
         {
             int k = (int)(t * InverseGridStep + 0.5);
             double d = k * GridStep - t;
-            ReadOnlySpan<double> row = Table.AsSpan(k * TableOrders + maxOrder, TaylorTerms);
-            // Horner form of Σ_j row[j] d^j / j!
-            double f = row[7] * InverseFactorial[7];
-            f = f * d + row[6] * InverseFactorial[6];
-            f = f * d + row[5] * InverseFactorial[5];
-            f = f * d + row[4] * InverseFactorial[4];
-            f = f * d + row[3] * InverseFactorial[3];
-            f = f * d + row[2] * InverseFactorial[2];
-            f = f * d + row[1];
-            f = f * d + row[0];
-            values[maxOrder] = f;
-            if (maxOrder > 0)
+            fixed (double* table = Table)
             {
-                double e = Math.Exp(-t);
-                double twoT = 2 * t;
-                for (int m = maxOrder - 1; m >= 0; m--)
+                double* row = table + k * TableOrders + maxOrder;
+                // Horner form of Σ_j row[j] d^j / j!
+                double f = row[7] * (1.0 / 5040);
+                f = f * d + row[6] * (1.0 / 720);
+                f = f * d + row[5] * (1.0 / 120);
+                f = f * d + row[4] * (1.0 / 24);
+                f = f * d + row[3] * (1.0 / 6);
+                f = f * d + row[2] * 0.5;
+                f = f * d + row[1];
+                f = f * d + row[0];
+                values[maxOrder] = f;
+                if (maxOrder > 0)
                 {
-                    f = (twoT * f + e) * InverseOddNumber[m];
-                    values[m] = f;
+                    double e = Math.Exp(-t);
+                    double twoT = 2 * t;
+                    fixed (double* inv = InverseOddNumber)
+                        for (int m = maxOrder - 1; m >= 0; m--)
+                        {
+                            f = (twoT * f + e) * inv[m];
+                            values[m] = f;
+                        }
                 }
             }
         }

@@ -9,7 +9,8 @@ namespace Orbitarium.Integrals;
 /// </summary>
 /// <remarks>
 /// One instance owns its work buffers (it is not thread-safe: use one per thread). No allocation happens per
-/// integral once the buffers have grown to the largest quartet class seen.
+/// integral once the buffers have grown to the largest quartet class seen. The recurrence steps of each class come
+/// precomputed from <see cref="EriClassPlan"/>.
 /// <para>Vertical recurrence used (W = (pP+qQ)/(p+q), ρ = pq/(p+q)):
 /// [e+1ᵢ,0|00]^(m) = (P−A)ᵢ[e0|00]^(m) + (W−P)ᵢ[e0|00]^(m+1) + eᵢ/(2p)([e−1ᵢ]^(m) − ρ/p [e−1ᵢ]^(m+1));
 /// [e0|f+1ᵢ,0]^(m) = (Q−C)ᵢ[e0|f0]^(m) + (W−Q)ᵢ[e0|f0]^(m+1) + fᵢ/(2q)([e0|f−1ᵢ]^(m) − ρ/q [e0|f−1ᵢ]^(m+1))
@@ -22,179 +23,283 @@ internal sealed class HeadGordonPople
     private double[] _braDone = new double[256];
     private double[] _scratch = new double[256];
     private readonly double[] _boys = new double[BoysFunction.MaxOrder + 1];
-    private readonly int[] _offsets = new int[(2 * RawShell.MaxL + 1) * (2 * RawShell.MaxL + 1)];
 
     /// <summary>Number of Cartesian integrals of the quartet: na·nb·nc·nd.</summary>
     public static int ResultLength(ShellPairData ab, ShellPairData cd) =>
         ab.A.CartesianCount * ab.B.CartesianCount * cd.A.CartesianCount * cd.B.CartesianCount;
 
     /// <summary>Computes the raw Cartesian block (ab|cd) into <paramref name="result"/>[((ia·nb + ib)·nc + ic)·nd + id].</summary>
-    public void Compute(ShellPairData ab, ShellPairData cd, Span<double> result)
+    public unsafe void Compute(ShellPairData ab, ShellPairData cd, Span<double> result)
     {
         int la = ab.A.AngularMomentum, lb = ab.B.AngularMomentum, lc = cd.A.AngularMomentum, ld = cd.B.AngularMomentum;
-        int lab = la + lb, lcd = lc + ld, lt = lab + lcd;
-        int braCount = HorizontalRecurrence.SourceCount(la, lb), ketCount = HorizontalRecurrence.SourceCount(lc, ld);
-        int na = CartesianIndex.Count(la), nb = CartesianIndex.Count(lb), nc = CartesianIndex.Count(lc), nd = CartesianIndex.Count(ld);
-        int braBelow = CartesianIndex.CountBelow(la), ketBelow = CartesianIndex.CountBelow(lc);
-
-        // Block layout of the vertical-recurrence buffer: block (Le, Lf) = [f][e][m], m = 0..lt−Le−Lf.
-        int stride = lab + 1;
-        int size = 0;
-        for (int lf = 0; lf <= lcd; lf++)
+        int lt = la + lb + lc + ld;
+        if (lt == 0)
         {
-            int lo = ELow(lf, la, lcd);
-            for (int le = lo; le <= lab; le++)
-            {
-                _offsets[lf * stride + le] = size;
-                size += CartesianIndex.Count(lf) * CartesianIndex.Count(le) * (lt - le - lf + 1);
-            }
+            result[0] = SsSs(ab, cd);
+            return;
         }
-        Ensure(ref _vrr, size);
-        Ensure(ref _contracted, braCount * ketCount);
-        var vrr = _vrr.AsSpan();
-        var contracted = _contracted.AsSpan(0, braCount * ketCount);
-        contracted.Clear();
-        var boys = _boys.AsSpan();
-
-        for (int ip = 0; ip < ab.Count; ip++)
+        if (lt == 1 && lb == 0 && ld == 0)
         {
-            double p = ab.Exponent[ip];
-            double px = ab.Center[3 * ip], py = ab.Center[3 * ip + 1], pz = ab.Center[3 * ip + 2];
-            double pax = ab.CenterMinusA[3 * ip], pay = ab.CenterMinusA[3 * ip + 1], paz = ab.CenterMinusA[3 * ip + 2];
-            double fab = ab.Factor[ip];
-            for (int iq = 0; iq < cd.Count; iq++)
+            PsSs(ab, cd, la == 1, result);
+            return;
+        }
+        if (la == 1 && lb == 0 && lc == 1 && ld == 0)
+        {
+            PsPs(ab, cd, result);
+            return;
+        }
+        var plan = EriClassPlan.For(la, lb, lc, ld);
+        int braCount = plan.BraCount, ketCount = plan.KetCount, contractedCount = braCount * ketCount;
+        int na = CartesianIndex.Count(la), nb = CartesianIndex.Count(lb), nc = CartesianIndex.Count(lc), nd = CartesianIndex.Count(ld);
+        Ensure(ref _vrr, plan.VrrSize);
+        Ensure(ref _contracted, contractedCount);
+        _contracted.AsSpan(0, contractedCount).Clear();
+        int n1 = plan.Stage1Count.Length, n2 = plan.Stage2Count.Length / 2;
+
+        fixed (double* v = _vrr, contracted = _contracted, boys = _boys)
+        fixed (double* abP = ab.Exponent, abC = ab.Center, abPA = ab.CenterMinusA, abF = ab.Factor)
+        fixed (double* cdP = cd.Exponent, cdC = cd.Center, cdQC = cd.CenterMinusA, cdF = cd.Factor)
+        fixed (int* s1 = plan.Stage1, s2 = plan.Stage2, map = plan.ContractionMap)
+        fixed (double* s1n = plan.Stage1Count, s2n = plan.Stage2Count)
+        {
+            double* pa = stackalloc double[3];
+            double* wp = stackalloc double[3];
+            double* qc = stackalloc double[3];
+            double* wq = stackalloc double[3];
+            for (int ip = 0; ip < ab.Count; ip++)
             {
-                double q = cd.Exponent[iq];
-                double qx = cd.Center[3 * iq], qy = cd.Center[3 * iq + 1], qz = cd.Center[3 * iq + 2];
-                double pq = p + q, rho = p * q / pq;
-                double dx = px - qx, dy = py - qy, dz = pz - qz;
-                double t = rho * (dx * dx + dy * dy + dz * dz);
-                double pre = fab * cd.Factor[iq] / Math.Sqrt(pq);
-                BoysFunction.EvaluateUnchecked(lt, t, boys);
-                var b00 = vrr.Slice(_offsets[0], lt + 1);
-                for (int m = 0; m <= lt; m++) b00[m] = pre * boys[m];
-                if (lt > 0)
+                double p = abP[ip];
+                double px = abC[3 * ip], py = abC[3 * ip + 1], pz = abC[3 * ip + 2];
+                pa[0] = abPA[3 * ip]; pa[1] = abPA[3 * ip + 1]; pa[2] = abPA[3 * ip + 2];
+                double fab = abF[ip];
+                double inv2p = 0.5 / p;
+                for (int iq = 0; iq < cd.Count; iq++)
                 {
-                    double wx = (p * px + q * qx) / pq, wy = (p * py + q * qy) / pq, wz = (p * pz + q * qz) / pq;
+                    double q = cdP[iq];
+                    double qx = cdC[3 * iq], qy = cdC[3 * iq + 1], qz = cdC[3 * iq + 2];
+                    double pq = p + q, invpq = 1 / pq, rho = p * q * invpq;
+                    double dx = px - qx, dy = py - qy, dz = pz - qz;
+                    double t = rho * (dx * dx + dy * dy + dz * dz);
+                    double pre = fab * cdF[iq] * Math.Sqrt(invpq);
+                    BoysFunction.EvaluateUnchecked(lt, t, boys);
+                    for (int m = 0; m <= lt; m++) v[m] = pre * boys[m];
+                    double wx = (p * px + q * qx) * invpq, wy = (p * py + q * qy) * invpq, wz = (p * pz + q * qz) * invpq;
+                    wp[0] = wx - px; wp[1] = wy - py; wp[2] = wz - pz;
                     // Stage 1: [e0|00]^(m)
-                    if (lab > 0)
+                    double rhoOverP = q * invpq;
+                    for (int k = 0; k < n1; k++)
                     {
-                        Span<double> paxis = [pax, pay, paz];
-                        Span<double> wpaxis = [wx - px, wy - py, wz - pz];
-                        double inv2p = 0.5 / p, rhoOverP = rho / p;
-                        for (int le = 1; le <= lab; le++)
+                        int* op = s1 + 5 * k;
+                        double* dst = v + op[0];
+                        double* e1 = v + op[1];
+                        double c1 = pa[op[3]], c2 = wp[op[3]];
+                        int mm = op[4];
+                        if (op[2] >= 0)
                         {
-                            int mmax = lt - le;
-                            int mm = mmax + 1, mm1 = mmax + 2, mm2 = mmax + 3;
-                            int off = _offsets[le], off1 = _offsets[le - 1], off2 = le >= 2 ? _offsets[le - 2] : 0;
-                            int[] axisOf = CartesianIndex.BuildAxis[le], m1Of = CartesianIndex.BuildMinus1[le], m2Of = CartesianIndex.BuildMinus2[le], nOf = CartesianIndex.BuildPowerMinus1[le];
-                            int ne = CartesianIndex.Count(le);
-                            for (int k = 0; k < ne; k++)
-                            {
-                                int axis = axisOf[k];
-                                double c1 = paxis[axis], c2 = wpaxis[axis];
-                                var dst = vrr.Slice(off + k * mm, mm);
-                                var e1 = vrr.Slice(off1 + m1Of[k] * mm1, mm1);
-                                if (m2Of[k] >= 0)
-                                {
-                                    var e2 = vrr.Slice(off2 + m2Of[k] * mm2, mm2);
-                                    double n = nOf[k] * inv2p, nr = n * rhoOverP;
-                                    for (int m = 0; m < mm; m++)
-                                        dst[m] = c1 * e1[m] + c2 * e1[m + 1] + n * e2[m] - nr * e2[m + 1];
-                                }
-                                else
-                                {
-                                    for (int m = 0; m < mm; m++)
-                                        dst[m] = c1 * e1[m] + c2 * e1[m + 1];
-                                }
-                            }
+                            double* e2 = v + op[2];
+                            double nn = s1n[k] * inv2p, nr = nn * rhoOverP;
+                            for (int m = 0; m < mm; m++)
+                                dst[m] = c1 * e1[m] + c2 * e1[m + 1] + nn * e2[m] - nr * e2[m + 1];
+                        }
+                        else
+                        {
+                            for (int m = 0; m < mm; m++)
+                                dst[m] = c1 * e1[m] + c2 * e1[m + 1];
                         }
                     }
                     // Stage 2: [e0|f0]^(m)
-                    if (lcd > 0)
+                    if (n2 > 0)
                     {
-                        double qcx = cd.CenterMinusA[3 * iq], qcy = cd.CenterMinusA[3 * iq + 1], qcz = cd.CenterMinusA[3 * iq + 2];
-                        Span<double> qaxis = [qcx, qcy, qcz];
-                        Span<double> wqaxis = [wx - qx, wy - qy, wz - qz];
-                        double inv2q = 0.5 / q, rhoOverQ = rho / q, inv2pq = 0.5 / pq;
-                        for (int lf = 1; lf <= lcd; lf++)
+                        qc[0] = cdQC[3 * iq]; qc[1] = cdQC[3 * iq + 1]; qc[2] = cdQC[3 * iq + 2];
+                        wq[0] = wx - qx; wq[1] = wy - qy; wq[2] = wz - qz;
+                        double inv2q = 0.5 / q, rhoOverQ = p * invpq, inv2pq = 0.5 * invpq;
+                        for (int k = 0; k < n2; k++)
                         {
-                            int nf = CartesianIndex.Count(lf);
-                            int nf1 = CartesianIndex.Count(lf - 1);
-                            int nf2 = lf >= 2 ? CartesianIndex.Count(lf - 2) : 0;
-                            int[] axisOf = CartesianIndex.BuildAxis[lf], m1Of = CartesianIndex.BuildMinus1[lf], m2Of = CartesianIndex.BuildMinus2[lf], nOf = CartesianIndex.BuildPowerMinus1[lf];
-                            for (int le = ELow(lf, la, lcd); le <= lab; le++)
+                            int* op = s2 + 6 * k;
+                            double* dst = v + op[0];
+                            double* f1 = v + op[1];
+                            int axis = op[4], mm = op[5];
+                            double c1 = qc[axis], c2 = wq[axis];
+                            int o2 = op[2], o3 = op[3];
+                            if (mm == 1)
                             {
-                                int ne = CartesianIndex.Count(le);
-                                int mm = lt - le - lf + 1;        // m count at (le, lf)
-                                int mmF1 = mm + 1;                // at (le, lf−1)
-                                int mmF2 = mm + 2;                // at (le, lf−2)
-                                int mmE1 = mm + 2;                // at (le−1, lf−1)
-                                int off = _offsets[lf * stride + le];
-                                int offF1 = _offsets[(lf - 1) * stride + le];
-                                int offF2 = lf >= 2 ? _offsets[(lf - 2) * stride + le] : 0;
-                                int offE1 = le >= 1 ? _offsets[(lf - 1) * stride + le - 1] : 0;
-                                int neE1 = le >= 1 ? CartesianIndex.Count(le - 1) : 0;
-                                int[] minusE = CartesianIndex.Minus[le], powE = CartesianIndex.Power[le];
-                                for (int f = 0; f < nf; f++)
-                                {
-                                    int axis = axisOf[f];
-                                    double c1 = qaxis[axis], c2 = wqaxis[axis];
-                                    int f1 = m1Of[f], f2 = m2Of[f];
-                                    double n = f2 >= 0 ? nOf[f] * inv2q : 0, nr = n * rhoOverQ;
-                                    for (int e = 0; e < ne; e++)
-                                    {
-                                        var dst = vrr.Slice(off + (f * ne + e) * mm, mm);
-                                        var s1 = vrr.Slice(offF1 + (f1 * ne + e) * mmF1, mmF1);
-                                        for (int m = 0; m < mm; m++) dst[m] = c1 * s1[m] + c2 * s1[m + 1];
-                                        if (f2 >= 0)
-                                        {
-                                            var s2 = vrr.Slice(offF2 + (f2 * ne + e) * mmF2, mmF2);
-                                            for (int m = 0; m < mm; m++) dst[m] += n * s2[m] - nr * s2[m + 1];
-                                        }
-                                        int pe = powE[3 * e + axis];
-                                        if (pe > 0)
-                                        {
-                                            int em = minusE[3 * e + axis];
-                                            double g = pe * inv2pq;
-                                            var s3 = vrr.Slice(offE1 + (f1 * neE1 + em) * mmE1, mmE1);
-                                            for (int m = 0; m < mm; m++) dst[m] += g * s3[m + 1];
-                                        }
-                                    }
-                                }
+                                double val = c1 * f1[0] + c2 * f1[1];
+                                if (o2 >= 0) val += s2n[2 * k] * inv2q * (v[o2] - rhoOverQ * v[o2 + 1]);
+                                if (o3 >= 0) val += s2n[2 * k + 1] * inv2pq * v[o3 + 1];
+                                dst[0] = val;
+                            }
+                            else if (o2 >= 0 && o3 >= 0)
+                            {
+                                double* f2 = v + o2;
+                                double* e1 = v + o3;
+                                double nn = s2n[2 * k] * inv2q, nr = nn * rhoOverQ, g = s2n[2 * k + 1] * inv2pq;
+                                for (int m = 0; m < mm; m++)
+                                    dst[m] = c1 * f1[m] + c2 * f1[m + 1] + nn * f2[m] - nr * f2[m + 1] + g * e1[m + 1];
+                            }
+                            else if (o2 >= 0)
+                            {
+                                double* f2 = v + o2;
+                                double nn = s2n[2 * k] * inv2q, nr = nn * rhoOverQ;
+                                for (int m = 0; m < mm; m++)
+                                    dst[m] = c1 * f1[m] + c2 * f1[m + 1] + nn * f2[m] - nr * f2[m + 1];
+                            }
+                            else if (o3 >= 0)
+                            {
+                                double* e1 = v + o3;
+                                double g = s2n[2 * k + 1] * inv2pq;
+                                for (int m = 0; m < mm; m++)
+                                    dst[m] = c1 * f1[m] + c2 * f1[m + 1] + g * e1[m + 1];
+                            }
+                            else
+                            {
+                                for (int m = 0; m < mm; m++)
+                                    dst[m] = c1 * f1[m] + c2 * f1[m + 1];
                             }
                         }
                     }
-                }
-                // Contract the [e0|f0]^(0) needed by the horizontal recurrence.
-                for (int lf = lc; lf <= lcd; lf++)
-                {
-                    int nf = CartesianIndex.Count(lf);
-                    int fBase = CartesianIndex.CountBelow(lf) - ketBelow;
-                    for (int le = la; le <= lab; le++)
-                    {
-                        int ne = CartesianIndex.Count(le);
-                        int mm = lt - le - lf + 1;
-                        int off = _offsets[lf * stride + le];
-                        int eBase = CartesianIndex.CountBelow(le) - braBelow;
-                        for (int f = 0; f < nf; f++)
-                            for (int e = 0; e < ne; e++)
-                                contracted[(eBase + e) * ketCount + fBase + f] += vrr[off + (f * ne + e) * mm];
-                    }
+                    for (int i = 0; i < contractedCount; i++) contracted[i] += v[map[i]];
                 }
             }
         }
 
         // Horizontal recurrences: bra (carrying all ket components), then ket.
+        if (lb == 0 && ld == 0)
+        {
+            _contracted.AsSpan(0, contractedCount).CopyTo(result);
+            return;
+        }
         int braLength = na * nb * ketCount;
         Ensure(ref _braDone, braLength);
         Ensure(ref _scratch, Math.Max(HorizontalRecurrence.ScratchLength(la, lb, ketCount), HorizontalRecurrence.ScratchLength(lc, ld, 1)));
-        HorizontalRecurrence.Apply(la, lb, ab.AbX, ab.AbY, ab.AbZ, 1, ketCount, contracted, _braDone.AsSpan(0, braLength), _scratch);
+        if (ld == 0)
+        {
+            HorizontalRecurrence.Apply(la, lb, ab.AbX, ab.AbY, ab.AbZ, 1, ketCount, _contracted.AsSpan(0, contractedCount), result[..braLength], _scratch);
+            return;
+        }
+        if (lb == 0)
+        {
+            HorizontalRecurrence.Apply(lc, ld, cd.AbX, cd.AbY, cd.AbZ, na, 1, _contracted.AsSpan(0, contractedCount), result[..(na * nc * nd)], _scratch);
+            return;
+        }
+        HorizontalRecurrence.Apply(la, lb, ab.AbX, ab.AbY, ab.AbZ, 1, ketCount, _contracted.AsSpan(0, contractedCount), _braDone.AsSpan(0, braLength), _scratch);
         HorizontalRecurrence.Apply(lc, ld, cd.AbX, cd.AbY, cd.AbZ, na * nb, 1, _braDone.AsSpan(0, braLength), result[..(na * nb * nc * nd)], _scratch);
     }
 
-    /// <summary>Lowest L(e) needed at ket level lf: the ket recurrence lowers e by one per level.</summary>
-    private static int ELow(int lf, int la, int lcd) => lf == 0 ? 0 : Math.Max(0, la - (lcd - lf));
+    /// <summary>(ss|ss): the contracted sum of prefactor × F₀.</summary>
+    private unsafe double SsSs(ShellPairData ab, ShellPairData cd)
+    {
+        double sum = 0;
+        double* f0 = stackalloc double[1];
+        fixed (double* abP = ab.Exponent, abC = ab.Center, abF = ab.Factor)
+        fixed (double* cdP = cd.Exponent, cdC = cd.Center, cdF = cd.Factor)
+        {
+            for (int ip = 0; ip < ab.Count; ip++)
+            {
+                double p = abP[ip], px = abC[3 * ip], py = abC[3 * ip + 1], pz = abC[3 * ip + 2], fab = abF[ip];
+                double inner = 0;
+                for (int iq = 0; iq < cd.Count; iq++)
+                {
+                    double q = cdP[iq];
+                    double pq = p + q, invpq = 1 / pq;
+                    double dx = px - cdC[3 * iq], dy = py - cdC[3 * iq + 1], dz = pz - cdC[3 * iq + 2];
+                    double t = p * q * invpq * (dx * dx + dy * dy + dz * dz);
+                    BoysFunction.EvaluateUnchecked(0, t, f0);
+                    inner += cdF[iq] * Math.Sqrt(invpq) * f0[0];
+                }
+                sum += fab * inner;
+            }
+        }
+        return sum;
+    }
+
+    /// <summary>(ps|ss) when <paramref name="braP"/>, else (ss|ps): Σ pre·((P−A)ᵢF₀ + (W−P)ᵢF₁), resp. with Q−C and W−Q.</summary>
+    private static unsafe void PsSs(ShellPairData ab, ShellPairData cd, bool braP, Span<double> result)
+    {
+        double rx = 0, ry = 0, rz = 0;
+        double* f = stackalloc double[2];
+        fixed (double* abP = ab.Exponent, abC = ab.Center, abPA = ab.CenterMinusA, abF = ab.Factor)
+        fixed (double* cdP = cd.Exponent, cdC = cd.Center, cdQC = cd.CenterMinusA, cdF = cd.Factor)
+        {
+            for (int ip = 0; ip < ab.Count; ip++)
+            {
+                double p = abP[ip], px = abC[3 * ip], py = abC[3 * ip + 1], pz = abC[3 * ip + 2], fab = abF[ip];
+                for (int iq = 0; iq < cd.Count; iq++)
+                {
+                    double q = cdP[iq];
+                    double pq = p + q, invpq = 1 / pq;
+                    double dx = px - cdC[3 * iq], dy = py - cdC[3 * iq + 1], dz = pz - cdC[3 * iq + 2];
+                    double t = p * q * invpq * (dx * dx + dy * dy + dz * dz);
+                    BoysFunction.EvaluateUnchecked(1, t, f);
+                    double pre = fab * cdF[iq] * Math.Sqrt(invpq);
+                    double f0 = pre * f[0];
+                    if (braP)
+                    {
+                        // W − P = q/(p+q) (Q − P)
+                        double g = -q * invpq * pre * f[1];
+                        rx += abPA[3 * ip] * f0 + g * dx;
+                        ry += abPA[3 * ip + 1] * f0 + g * dy;
+                        rz += abPA[3 * ip + 2] * f0 + g * dz;
+                    }
+                    else
+                    {
+                        // W − Q = p/(p+q) (P − Q)
+                        double g = p * invpq * pre * f[1];
+                        rx += cdQC[3 * iq] * f0 + g * dx;
+                        ry += cdQC[3 * iq + 1] * f0 + g * dy;
+                        rz += cdQC[3 * iq + 2] * f0 + g * dz;
+                    }
+                }
+            }
+        }
+        result[0] = rx; result[1] = ry; result[2] = rz;
+    }
+
+    /// <summary>(ps|ps): [pᵢ|pⱼ] = (Q−C)ⱼ[pᵢ|s]^(0) + (W−Q)ⱼ[pᵢ|s]^(1) + δᵢⱼ/(2(p+q)) [s|s]^(1), with
+    /// [pᵢ|s]^(m) = (P−A)ᵢF_m + (W−P)ᵢF_{m+1} (times the prefactor).</summary>
+    private static unsafe void PsPs(ShellPairData ab, ShellPairData cd, Span<double> result)
+    {
+        double* r = stackalloc double[9];
+        for (int i = 0; i < 9; i++) r[i] = 0;
+        double* f = stackalloc double[3];
+        double* a0 = stackalloc double[3];
+        double* a1 = stackalloc double[3];
+        double* qcw = stackalloc double[6];
+        fixed (double* abP = ab.Exponent, abC = ab.Center, abPA = ab.CenterMinusA, abF = ab.Factor)
+        fixed (double* cdP = cd.Exponent, cdC = cd.Center, cdQC = cd.CenterMinusA, cdF = cd.Factor)
+        {
+            for (int ip = 0; ip < ab.Count; ip++)
+            {
+                double p = abP[ip], px = abC[3 * ip], py = abC[3 * ip + 1], pz = abC[3 * ip + 2], fab = abF[ip];
+                double pax = abPA[3 * ip], pay = abPA[3 * ip + 1], paz = abPA[3 * ip + 2];
+                for (int iq = 0; iq < cd.Count; iq++)
+                {
+                    double q = cdP[iq];
+                    double pq = p + q, invpq = 1 / pq;
+                    double dx = px - cdC[3 * iq], dy = py - cdC[3 * iq + 1], dz = pz - cdC[3 * iq + 2];
+                    double t = p * q * invpq * (dx * dx + dy * dy + dz * dz);
+                    BoysFunction.EvaluateUnchecked(2, t, f);
+                    double pre = fab * cdF[iq] * Math.Sqrt(invpq);
+                    double f0 = pre * f[0], f1 = pre * f[1], f2 = pre * f[2];
+                    double wpScale = -q * invpq, wqScale = p * invpq; // W−P = −q/(p+q)(P−Q), W−Q = p/(p+q)(P−Q)
+                    double wpx = wpScale * dx, wpy = wpScale * dy, wpz = wpScale * dz;
+                    a0[0] = pax * f0 + wpx * f1; a0[1] = pay * f0 + wpy * f1; a0[2] = paz * f0 + wpz * f1;
+                    a1[0] = pax * f1 + wpx * f2; a1[1] = pay * f1 + wpy * f2; a1[2] = paz * f1 + wpz * f2;
+                    qcw[0] = cdQC[3 * iq]; qcw[1] = cdQC[3 * iq + 1]; qcw[2] = cdQC[3 * iq + 2];
+                    qcw[3] = wqScale * dx; qcw[4] = wqScale * dy; qcw[5] = wqScale * dz;
+                    double d = 0.5 * invpq * f1;
+                    for (int i = 0; i < 3; i++)
+                    {
+                        double x0 = a0[i], x1 = a1[i];
+                        r[3 * i] += qcw[0] * x0 + qcw[3] * x1;
+                        r[3 * i + 1] += qcw[1] * x0 + qcw[4] * x1;
+                        r[3 * i + 2] += qcw[2] * x0 + qcw[5] * x1;
+                        r[4 * i] += d;
+                    }
+                }
+            }
+        }
+        for (int i = 0; i < 9; i++) result[i] = r[i];
+    }
 
     private static void Ensure(ref double[] buffer, int length)
     {

@@ -36,7 +36,8 @@ internal sealed class ShellQuartetEvaluator
             for (int q = 0; q <= p; q++)
             {
                 int pq = PairIndex(p, q);
-                pairs[pq] = new ShellPairData(Raw[p], Raw[q]);
+                // The recurrences are cheapest with the higher angular momentum first.
+                pairs[pq] = Raw[p].AngularMomentum >= Raw[q].AngularMomentum ? new ShellPairData(Raw[p], Raw[q]) : new ShellPairData(Raw[q], Raw[p]);
             }
             for (int q = 0; q <= p; q++)
             {
@@ -77,7 +78,7 @@ internal sealed class ShellQuartetEvaluator
     /// <summary>Largest Cartesian component count of any shell.</summary>
     public int MaxCartesian { get; }
 
-    /// <summary>Pair data indexed by <see cref="PairIndex"/>.</summary>
+    /// <summary>Pair data indexed by <see cref="PairIndex"/>; for P ≥ Q the pair is (P, Q) unless L(P) &lt; L(Q), when it is (Q, P).</summary>
     public ShellPairData[] Pairs { get; }
 
     /// <summary>Cauchy–Schwarz factor of each pair, indexed by <see cref="PairIndex"/>.</summary>
@@ -110,8 +111,31 @@ internal sealed class ShellQuartetEvaluator
             var ab = _owner.Pairs[PairIndex(p, q)];
             var cd = _owner.Pairs[PairIndex(r, s)];
             int len = HeadGordonPople.ResultLength(ab, cd);
-            _engine.Compute(ab, cd, _raw.AsSpan(0, len));
+            bool swapBra = !ReferenceEquals(ab.A, _owner.Raw[p]);
+            bool swapKet = !ReferenceEquals(cd.A, _owner.Raw[r]);
+            swapBra &= p != q;
+            swapKet &= r != s;
             var t = _owner.Transforms;
+            if (!swapBra && !swapKet)
+            {
+                _engine.Compute(ab, cd, _raw.AsSpan(0, len));
+            }
+            else
+            {
+                // Computed as (ab|cd) with a, b (and/or c, d) exchanged: reorder to [p][q][r][s].
+                _engine.Compute(ab, cd, _result.AsSpan(0, len));
+                int n0 = ab.A.CartesianCount, n1 = ab.B.CartesianCount, n2 = cd.A.CartesianCount, n3 = cd.B.CartesianCount;
+                int nq = t[q].Columns, nr = t[r].Columns, ns = t[s].Columns;
+                for (int i0 = 0; i0 < n0; i0++)
+                    for (int i1 = 0; i1 < n1; i1++)
+                        for (int i2 = 0; i2 < n2; i2++)
+                            for (int i3 = 0; i3 < n3; i3++)
+                            {
+                                int ip = swapBra ? i1 : i0, iq = swapBra ? i0 : i1;
+                                int ir = swapKet ? i3 : i2, js = swapKet ? i2 : i3;
+                                _raw[((ip * nq + iq) * nr + ir) * ns + js] = _result[((i0 * n1 + i1) * n2 + i2) * n3 + i3];
+                            }
+            }
             ShellTransform.Apply4(t[p], t[q], t[r], t[s], _raw, _result);
             return _result.AsSpan(0, t[p].Rows * t[q].Rows * t[r].Rows * t[s].Rows);
         }

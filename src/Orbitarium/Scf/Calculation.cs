@@ -85,6 +85,10 @@ public sealed class Calculation
     /// <summary>Returns a set-up with another basis set on the same molecule.</summary>
     public Calculation WithBasis(BasisSet basisSet, bool? pure = null) => Create(Molecule, basisSet, pure, Options);
 
+    /// <summary>Returns a set-up with another built-in basis set, found by name (see <see cref="BasisSetLibrary"/>).</summary>
+    /// <exception cref="OrbitariumInputException">The name is unknown or the set lacks an element.</exception>
+    public Calculation WithBasis(string basisSetName, bool? pure = null) => Create(Molecule, BasisSetLibrary.Get(basisSetName), pure, Options);
+
     /// <summary>Returns a set-up for another molecule (e.g. a displaced geometry) with the same basis set and options.</summary>
     /// <exception cref="OrbitariumInputException">The basis set lacks an element of the new molecule.</exception>
     public Calculation WithMolecule(Molecule molecule)

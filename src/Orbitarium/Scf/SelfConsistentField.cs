@@ -161,7 +161,7 @@ public static class SelfConsistentField
             FockBeta = fock.Beta,
             Overlap = s,
             CoreHamiltonian = integrals.CoreHamiltonian,
-            SpinSquared = SpinSquared(state.CoefficientsAlpha, state.CoefficientsBeta, s, na, nb),
+            SpinSquared = Math.Max(0, SpinSquared(state.CoefficientsAlpha, state.CoefficientsBeta, s, na, nb)),
             IntegralMode = integrals.Kernel.Mode,
             OrthogonalizationUsed = orth.KindUsed,
             DroppedLinearDependencies = orth.DroppedCount,

@@ -29,6 +29,11 @@ public class BasisSetLibraryTests
         }
 
         [Fact]
+        public void Names_list_the_common_sets_from_small_to_large() =>
+            Assert.Equal(["STO-3G", "STO-6G", "3-21G", "6-31G", "6-31G*", "6-31G**", "6-311G**", "cc-pVDZ", "cc-pVTZ"],
+                BasisSetLibrary.Names.Take(9));
+
+        [Fact]
         public void FromLibrary_is_the_same_lookup() =>
             Assert.Same(BasisSetLibrary.Get("cc-pVDZ"), BasisSet.FromLibrary("CC-pvdz"));
     }

@@ -7,7 +7,7 @@ public class ClosedFormIntegralTests
 {
     public class H2Sto3G
     {
-        // Szabo & Ostlund, Modern Quantum Chemistry (Dover 1996), section 3.5.2: H2, STO-3G with ζ = 1.24, R = 1.4 bohr.
+        // Szabo and Ostlund, Modern Quantum Chemistry (Dover 1996), section 3.5.2: H2, STO-3G with ζ = 1.24, R = 1.4 bohr.
         // Their tables print 4 decimals, so the tolerance is 5e-5.
         private readonly Orbitarium.BasisSets.MolecularBasis _basis = TestBases.H2Sto3G();
 
@@ -24,9 +24,9 @@ public class ClosedFormIntegralTests
         {
             var t = OneElectronIntegrals.Kinetic(_basis);
             Assert.Equal(0.7600, t[0, 0], 4);
-            Assert.Equal(0.2365, t[0, 1], 4); // Szabo & Ostlund eq. 3.229 (from memory)
+            Assert.Equal(0.2365, t[0, 1], 4); // Szabo and Ostlund eq. 3.229 (from memory)
             var h = OneElectronIntegrals.CoreHamiltonian(_basis);
-            Assert.Equal(-1.1204, h[0, 0], 4); // Szabo & Ostlund eq. 3.232 (from memory)
+            Assert.Equal(-1.1204, h[0, 0], 4); // Szabo and Ostlund eq. 3.232 (from memory)
             Assert.Equal(-0.9584, h[0, 1], 4);
         }
 

@@ -6,7 +6,7 @@ namespace Orbitarium.Tests.Integrals;
 /// <summary>Small hand-written bases for the integral tests.</summary>
 internal static class TestBases
 {
-    // STO-3G expansion of a ζ = 1 Slater 1s: Hehre, Stewart & Pople, J. Chem. Phys. 51, 2657 (1969).
+    // STO-3G expansion of a ζ = 1 Slater 1s: Hehre, Stewart and Pople, J. Chem. Phys. 51, 2657 (1969).
     public static readonly double[] Sto3GExponents = [2.227660, 0.405771, 0.109818];
     public static readonly double[] Sto3GCoefficients = [0.154329, 0.535328, 0.444635];
 

@@ -72,6 +72,21 @@ public class SelfConsistentFieldTests
         }
     }
 
+    public class IntegralModes
+    {
+        [Fact]
+        public void Integral_direct_and_in_core_Fock_builds_give_the_same_energy_and_say_which_ran()
+        {
+            var inCore = WaterCalc().RunRhf();
+            var direct = WaterCalc().WithOptions(o => o with { ForceDirect = true }).RunRhf();
+            var noMemory = WaterCalc().WithOptions(o => o with { MemoryBudgetBytes = 0 }).RunRhf();
+            Assert.Contains("in-core", inCore.IntegralMode);
+            Assert.Contains("direct", direct.IntegralMode);
+            Assert.Contains("direct", noMemory.IntegralMode);
+            Assert.Equal(inCore.TotalEnergyHartree, direct.TotalEnergyHartree, 1e-9);
+        }
+    }
+
     public class Cancellation
     {
         [Fact]

@@ -1,0 +1,39 @@
+using BenchmarkDotNet.Attributes;
+using BenchmarkDotNet.Engines;
+using Orbitarium.Chemistry;
+using Orbitarium.Scf;
+
+namespace Orbitarium.Benchmarks.Scf;
+
+/// <summary>Converged RHF/cc-pVDZ from scratch (integrals, guess, iterations) on the TIDEGLASS water probe and
+/// aromatic spacer. Long single-shot runs, so the monitoring strategy with one warm-up and two measured runs.</summary>
+[SimpleJob(RunStrategy.Monitoring, launchCount: 1, warmupCount: 1, iterationCount: 2)]
+[MemoryDiagnoser]
+public class ScfBenchmarks
+{
+    private Molecule _water = null!;
+    private Molecule _benzene = null!;
+
+    [GlobalSetup]
+    public void Setup()
+    {
+        _water = Molecule.FromXyzFile(Example("tg1-water.xyz"));
+        _benzene = Molecule.FromXyzFile(Example("tgb-benzene.xyz"));
+    }
+
+    [Benchmark(Description = "water RHF/cc-pVDZ")]
+    public double WaterRhfCcPvdz() => Converged(_water.WithBasis("cc-pVDZ").RunRhf());
+
+    [Benchmark(Description = "benzene RHF/cc-pVDZ")]
+    public double BenzeneRhfCcPvdz() => Converged(_benzene.WithBasis("cc-pVDZ").RunRhf());
+
+    private static double Converged(ScfResult r) =>
+        r.Converged ? r.TotalEnergyHartree : throw new InvalidOperationException($"not converged: {r.StopReason}");
+
+    private static string Example(string name)
+    {
+        var dir = new DirectoryInfo(AppContext.BaseDirectory);
+        while (dir is not null && !File.Exists(Path.Combine(dir.FullName, "Repl.sln"))) dir = dir.Parent;
+        return Path.Combine(dir?.FullName ?? throw new InvalidOperationException("Repl.sln not found."), "examples", name);
+    }
+}

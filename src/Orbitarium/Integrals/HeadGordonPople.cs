@@ -10,7 +10,7 @@ namespace Orbitarium.Integrals;
 /// <remarks>
 /// One instance owns its work buffers (it is not thread-safe: use one per thread). No allocation happens per
 /// integral once the buffers have grown to the largest quartet class seen. The recurrence steps of each class come
-/// precomputed from <see cref="EriClassPlan"/>.
+/// precomputed from <see cref="EriClassPlan"/>; (ss|ss), (ps|ss), (ss|ps) and (ps|ps) have hand-written paths.
 /// <para>Vertical recurrence used (W = (pP+qQ)/(p+q), ρ = pq/(p+q)):
 /// [e+1ᵢ,0|00]^(m) = (P−A)ᵢ[e0|00]^(m) + (W−P)ᵢ[e0|00]^(m+1) + eᵢ/(2p)([e−1ᵢ]^(m) − ρ/p [e−1ᵢ]^(m+1));
 /// [e0|f+1ᵢ,0]^(m) = (Q−C)ᵢ[e0|f0]^(m) + (W−Q)ᵢ[e0|f0]^(m+1) + fᵢ/(2q)([e0|f−1ᵢ]^(m) − ρ/q [e0|f−1ᵢ]^(m+1))
@@ -18,6 +18,11 @@ namespace Orbitarium.Integrals;
 /// </remarks>
 internal sealed class HeadGordonPople
 {
+    /// <summary>Primitive quartets whose prefactor 2π^{5/2}/(pq√(p+q)) K_ab K_cd |c c c c| (the bound on their
+    /// [00|00]^(0)) is below this are skipped: 1e-18, far below the 1e-12 Schwarz threshold of the tensor and the
+    /// rounding of a sum of a few thousand terms.</summary>
+    public const double PrimitiveCutoff = 1e-18;
+
     private double[] _vrr = new double[256];
     private double[] _contracted = new double[256];
     private double[] _braDone = new double[256];
@@ -81,6 +86,7 @@ internal sealed class HeadGordonPople
                     double dx = px - qx, dy = py - qy, dz = pz - qz;
                     double t = rho * (dx * dx + dy * dy + dz * dz);
                     double pre = fab * cdF[iq] * Math.Sqrt(invpq);
+                    if (Math.Abs(pre) < PrimitiveCutoff) continue;
                     BoysFunction.EvaluateUnchecked(lt, t, boys);
                     for (int m = 0; m <= lt; m++) v[m] = pre * boys[m];
                     double wx = (p * px + q * qx) * invpq, wy = (p * py + q * qy) * invpq, wz = (p * pz + q * qz) * invpq;
@@ -203,8 +209,10 @@ internal sealed class HeadGordonPople
                     double pq = p + q, invpq = 1 / pq;
                     double dx = px - cdC[3 * iq], dy = py - cdC[3 * iq + 1], dz = pz - cdC[3 * iq + 2];
                     double t = p * q * invpq * (dx * dx + dy * dy + dz * dz);
+                    double w = cdF[iq] * Math.Sqrt(invpq);
+                    if (Math.Abs(fab * w) < PrimitiveCutoff) continue;
                     BoysFunction.EvaluateUnchecked(0, t, f0);
-                    inner += cdF[iq] * Math.Sqrt(invpq) * f0[0];
+                    inner += w * f0[0];
                 }
                 sum += fab * inner;
             }
@@ -229,8 +237,9 @@ internal sealed class HeadGordonPople
                     double pq = p + q, invpq = 1 / pq;
                     double dx = px - cdC[3 * iq], dy = py - cdC[3 * iq + 1], dz = pz - cdC[3 * iq + 2];
                     double t = p * q * invpq * (dx * dx + dy * dy + dz * dz);
-                    BoysFunction.EvaluateUnchecked(1, t, f);
                     double pre = fab * cdF[iq] * Math.Sqrt(invpq);
+                    if (Math.Abs(pre) < PrimitiveCutoff) continue;
+                    BoysFunction.EvaluateUnchecked(1, t, f);
                     double f0 = pre * f[0];
                     if (braP)
                     {
@@ -277,8 +286,9 @@ internal sealed class HeadGordonPople
                     double pq = p + q, invpq = 1 / pq;
                     double dx = px - cdC[3 * iq], dy = py - cdC[3 * iq + 1], dz = pz - cdC[3 * iq + 2];
                     double t = p * q * invpq * (dx * dx + dy * dy + dz * dz);
-                    BoysFunction.EvaluateUnchecked(2, t, f);
                     double pre = fab * cdF[iq] * Math.Sqrt(invpq);
+                    if (Math.Abs(pre) < PrimitiveCutoff) continue;
+                    BoysFunction.EvaluateUnchecked(2, t, f);
                     double f0 = pre * f[0], f1 = pre * f[1], f2 = pre * f[2];
                     double wpScale = -q * invpq, wqScale = p * invpq; // W−P = −q/(p+q)(P−Q), W−Q = p/(p+q)(P−Q)
                     double wpx = wpScale * dx, wpy = wpScale * dy, wpz = wpScale * dz;

@@ -1,16 +1,27 @@
 using BenchmarkDotNet.Attributes;
+using BenchmarkDotNet.Configs;
 using BenchmarkDotNet.Engines;
+using BenchmarkDotNet.Jobs;
+using BenchmarkDotNet.Toolchains.InProcess.Emit;
 using Orbitarium.Chemistry;
 using Orbitarium.Scf;
 
 namespace Orbitarium.Benchmarks.Scf;
 
 /// <summary>Converged RHF/cc-pVDZ from scratch (integrals, guess, iterations) on the TIDEGLASS water probe and
-/// aromatic spacer. Long single-shot runs, so the monitoring strategy with one warm-up and two measured runs.</summary>
-[SimpleJob(RunStrategy.Monitoring, launchCount: 1, warmupCount: 1, iterationCount: 2)]
+/// aromatic spacer. Long single-shot runs, so the monitoring strategy with one warm-up and two measured runs,
+/// in process (rebuilding a separate benchmark executable timed out on the shared build machine).</summary>
+[Config(typeof(ScfBenchmarkConfig))]
 [MemoryDiagnoser]
 public class ScfBenchmarks
 {
+    private sealed class ScfBenchmarkConfig : ManualConfig
+    {
+        public ScfBenchmarkConfig() =>
+            AddJob(Job.Default.WithStrategy(RunStrategy.Monitoring).WithLaunchCount(1).WithWarmupCount(1).WithIterationCount(2)
+                .WithToolchain(InProcessEmitToolchain.Instance));
+    }
+
     private Molecule _water = null!;
     private Molecule _benzene = null!;
 

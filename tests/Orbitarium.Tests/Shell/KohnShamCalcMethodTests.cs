@@ -21,7 +21,7 @@ public class KohnShamCalcMethodTests
         Assert.True(code == 0, err);
         using var doc = JsonDocument.Parse(text);
         var root = doc.RootElement;
-        Assert.Equal("rks/svwn5", root.GetProperty("method").GetString());
+        Assert.Equal("svwn5", root.GetProperty("method").GetString());
         Assert.Equal("coarse", root.GetProperty("grid_level").GetString());
         Assert.True(root.GetProperty("grid_points").GetInt32() > 1000);
         Assert.True(root.GetProperty("exchange_correlation_energy").GetDouble() < 0);

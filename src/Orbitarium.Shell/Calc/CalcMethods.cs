@@ -14,6 +14,7 @@ internal static class CalcMethods
         new HartreeFockCalcMethod(ScfReference.Unrestricted),
         new HartreeFockCalcMethod(ScfReference.RestrictedOpenShell),
         .. CorrelationCalcMethod.All,
+        .. KohnShamCalcMethod.All,
     ];
 
     /// <summary>Extra command-line options some methods read through <see cref="CalcRequest.ParseResult"/>
@@ -21,6 +22,7 @@ internal static class CalcMethods
     public static readonly IReadOnlyList<Option> ExtraOptions =
     [
         CorrelationCalcMethod.ReferenceOption, CorrelationCalcMethod.FrozenCoreOption, CorrelationCalcMethod.StatesOption,
+        KohnShamCalcMethod.GridOption,
     ];
 
     /// <summary>The method called <paramref name="name"/> (case-insensitive).</summary>

@@ -59,7 +59,7 @@ public static class PhysicalConstants
     /// <summary>Avogadro constant in mol⁻¹ (exact): 6.02214076e23.</summary>
     public const double AvogadroPerMole = 6.02214076e23;
 
-    /// <summary>Molar gas constant in J/(mol·K): N_A·k_B = 8.314462618.</summary>
+    /// <summary>Molar gas constant in J K⁻¹ mol⁻¹: N_A·k_B = 8.314462618.</summary>
     public const double GasConstantJoulePerMoleKelvin = 8.314462618;
 
     /// <summary>Standard pressure, 1 bar = 100000 Pa (IUPAC standard state).</summary>

@@ -112,7 +112,7 @@ internal static class GeometryCalcTask
                 ["thermal_energy_correction"] = thermo.ThermalEnergyCorrectionHartree,
                 ["enthalpy_correction"] = thermo.EnthalpyCorrectionHartree,
                 ["gibbs_correction"] = thermo.GibbsCorrectionHartree,
-                ["entropy_j_mol_k"] = thermo.EntropyJoulePerMoleKelvin,
+                ["entropy_j_per_k_mol"] = thermo.EntropyJoulePerMoleKelvin,
                 ["enthalpy"] = thermo.EnthalpyHartree,
                 ["gibbs_energy"] = thermo.GibbsEnergyHartree,
                 ["excluded_imaginary_modes"] = thermo.ExcludedImaginaryModes,

@@ -5,7 +5,7 @@ namespace Orbitarium.Geometry.Thermochemistry;
 
 /// <summary>Ideal-gas, rigid-rotor, harmonic-oscillator thermochemistry of one molecule at a temperature and pressure.
 /// Energies are per molecule in hartree; entropies per molecule in hartree/kelvin (multiply by
-/// <see cref="PhysicalConstants.HartreeToKJPerMol"/>·1000 for J/(mol·K)).</summary>
+/// <see cref="PhysicalConstants.HartreeToKJPerMol"/>·1000 for J K⁻¹ mol⁻¹).</summary>
 /// <param name="TemperatureKelvin">Temperature T in K.</param>
 /// <param name="PressurePascal">Pressure p in Pa.</param>
 /// <param name="PointGroup">The point group used for the symmetry number (Schoenflies).</param>
@@ -38,7 +38,7 @@ public sealed record ThermochemistryResult(
     public double EntropyHartreePerKelvin =>
         TranslationalEntropyHartreePerKelvin + RotationalEntropyHartreePerKelvin + VibrationalEntropyHartreePerKelvin + ElectronicEntropyHartreePerKelvin;
 
-    /// <summary>Total entropy in J/(mol·K).</summary>
+    /// <summary>Total entropy in J K⁻¹ mol⁻¹.</summary>
     public double EntropyJoulePerMoleKelvin => EntropyHartreePerKelvin * PhysicalConstants.HartreeToKJPerMol * 1000;
 
     /// <summary>Gibbs-energy correction H − TS − E₀ in hartree.</summary>
@@ -65,7 +65,7 @@ public sealed record ThermochemistryResult(
         sb.Append(CultureInfo.InvariantCulture, $"  thermal energy corr.   {ThermalEnergyCorrectionHartree,16:F8} Eh\n");
         sb.Append(CultureInfo.InvariantCulture, $"  enthalpy correction    {EnthalpyCorrectionHartree,16:F8} Eh\n");
         sb.Append(CultureInfo.InvariantCulture, $"  Gibbs correction       {GibbsCorrectionHartree,16:F8} Eh\n");
-        sb.Append(CultureInfo.InvariantCulture, $"  entropy                {EntropyJoulePerMoleKelvin,16:F4} J/(mol K)\n");
+        sb.Append(CultureInfo.InvariantCulture, $"  entropy                {EntropyJoulePerMoleKelvin,16:F4} J K⁻¹ mol⁻¹\n");
         sb.Append(CultureInfo.InvariantCulture, $"  E0 + ZPE               {ZeroPointCorrectedEnergyHartree,16:F8} Eh\n");
         sb.Append(CultureInfo.InvariantCulture, $"  H                      {EnthalpyHartree,16:F8} Eh\n");
         sb.Append(CultureInfo.InvariantCulture, $"  G                      {GibbsEnergyHartree,16:F8} Eh");

@@ -42,8 +42,8 @@ public class IdealGasThermochemistryTests
     [Fact]
     public void Standard_entropy_of_N2_agrees_with_the_tabulated_value()
     {
-        // S°(N2, 298.15 K, 1 bar) = 191.61 J/(mol·K): CODATA Key Values for Thermodynamics (Cox, Wagman, Medvedev,
-        // 1989), from memory. Tolerance 0.1 J/(mol·K): rigid rotor at r_e instead of the vibrationally averaged r₀.
+        // S°(N2, 298.15 K, 1 bar) = 191.61 J K⁻¹ mol⁻¹: CODATA Key Values for Thermodynamics (Cox, Wagman, Medvedev,
+        // 1989), from memory. Tolerance 0.1 J K⁻¹ mol⁻¹: rigid rotor at r_e instead of the vibrationally averaged r₀.
         var (_, vib) = Nitrogen();
         Assert.Equal(191.61, vib.Thermochemistry().EntropyJoulePerMoleKelvin, 0.1);
     }
@@ -51,7 +51,7 @@ public class IdealGasThermochemistryTests
     [Fact]
     public void Argon_entropy_is_the_Sackur_Tetrode_value()
     {
-        // S°(Ar, 298.15 K, 1 bar) = 154.846 J/(mol·K): CODATA Key Values for Thermodynamics (1989), from memory.
+        // S°(Ar, 298.15 K, 1 bar) = 154.846 J K⁻¹ mol⁻¹: CODATA Key Values for Thermodynamics (1989), from memory.
         var ar = Molecule.Empty.AddAtom("Ar", 0, 0, 0);
         var vib = new DelegateSurface("atom", _ => -526.8, _ => [0.0, 0.0, 0.0]).Frequencies(ar);
         Assert.Empty(vib.Modes);

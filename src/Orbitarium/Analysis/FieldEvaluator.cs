@@ -23,7 +23,7 @@ public static class FieldEvaluator
     /// <param name="coefficients">N × M matrix of MO coefficients, one orbital per column.</param>
     /// <param name="orbitalIndex">Orbital index 0..M−1 (0-based, in the coefficients' order).</param>
     /// <param name="grid">Where to evaluate.</param>
-    /// <param name="label">Name of the quantity (default "MO k").</param>
+    /// <param name="label">Name of the quantity (default "MO k", numbered from 1 as in the orbital tables).</param>
     /// <param name="cancellationToken">Stops the evaluation.</param>
     /// <exception cref="OrbitariumInputException">The orbital index is unknown or the shapes do not match.</exception>
     public static GridField Orbital(MolecularBasis basis, Matrix<double> coefficients, int orbitalIndex, IGrid grid,
@@ -33,7 +33,7 @@ public static class FieldEvaluator
         ArgumentNullException.ThrowIfNull(grid);
         var c = coefficients.Column(orbitalIndex).ToArray();
         var values = Evaluate(basis, grid, (phi, _) => Dot(c, phi), cancellationToken);
-        return new GridField(grid, basis.Molecule, values, label ?? $"MO {orbitalIndex}", "bohr^-3/2", true);
+        return new GridField(grid, basis.Molecule, values, label ?? $"MO {orbitalIndex + 1}", "bohr^-3/2", true);
     }
 
     /// <summary>The density of an AO density matrix (total, one spin, or a difference such as α − β).</summary>
@@ -112,7 +112,7 @@ public static class FieldEvaluator
         var values = Evaluate(basis, grid, (phi, _) => 2 * occupation * Dot(ca, phi) * Dot(cb, phi), cancellationToken);
         var m = basis.Molecule;
         string q = string.Create(CultureInfo.InvariantCulture,
-            $"interference of MO {orbitalIndex} between {m.Atoms[atomA].Symbol}{atomA + 1} and {m.Atoms[atomB].Symbol}{atomB + 1}");
+            $"interference of MO {orbitalIndex + 1} between {m.Atoms[atomA].Symbol}{atomA + 1} and {m.Atoms[atomB].Symbol}{atomB + 1}");
         return new GridField(grid, m, values, q, "bohr^-3", true);
     }
 

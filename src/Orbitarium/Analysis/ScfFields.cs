@@ -20,7 +20,7 @@ public static class ScfFields
     {
         ArgumentNullException.ThrowIfNull(result);
         var c = spin == OrbitalSpin.Alpha ? result.CoefficientsAlpha : result.CoefficientsBeta;
-        return FieldEvaluator.Orbital(result.Basis, c, orbitalIndex, grid, $"MO {orbitalIndex}{SpinSuffix(result, spin)}", cancellationToken);
+        return FieldEvaluator.Orbital(result.Basis, c, orbitalIndex, grid, $"MO {orbitalIndex + 1}{SpinSuffix(result, spin)}", cancellationToken);
     }
 
     /// <summary>The total electron density ρ = ρ^α + ρ^β on a grid.</summary>

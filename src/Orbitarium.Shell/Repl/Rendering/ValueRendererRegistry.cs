@@ -86,6 +86,11 @@ public sealed class ValueRendererRegistry
     public static string PlainText(object? value)
     {
         if (value is null) return "null";
+        // Library types that write their own summary (results, options) are shown by it as is; the C# formatter
+        // would wrap that text in brackets.
+        var declaring = value.GetType().GetMethod(nameof(ToString), Type.EmptyTypes)?.DeclaringType;
+        if (declaring?.Namespace?.StartsWith("Orbitarium", StringComparison.Ordinal) == true)
+            return value.ToString() ?? value.GetType().Name;
         try
         {
             return CSharpObjectFormatter.Instance.FormatObject(value);

@@ -61,6 +61,14 @@ public class RenderingTests
         }
 
         [Fact]
+        public void Library_values_with_their_own_summary_show_it_unwrapped()
+        {
+            // Results and vectors write their own text; the C# display would wrap it in brackets.
+            string text = RenderToText(new Vector3D(1, 2, 3)).Trim();
+            Assert.StartsWith("(1.000000, 2.000000, 3.000000)", text);
+        }
+
+        [Fact]
         public void A_failing_renderer_falls_back_to_text()
         {
             var registry = new ValueRendererRegistry().Register<Figure>(_ => throw new InvalidOperationException("no terminal"));

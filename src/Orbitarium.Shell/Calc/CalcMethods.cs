@@ -36,6 +36,23 @@ internal static class CalcMethods
         throw new OrbitariumInputException($"Unknown method '{name}'; use one of: {string.Join(", ", All.Select(m => m.Names[0]))}.");
     }
 
+    /// <summary>Records the SCF phases' timings and wraps an SCF (Hartree–Fock or Kohn–Sham) result as an outcome;
+    /// methods add their own keys with <c>with</c>.</summary>
+    public static CalcOutcome FromScf(CalcRequest request, ScfResult scf, double totalEnergyHartree, string methodLabel)
+    {
+        request.Timings.Add("integrals", scf.IntegralSeconds);
+        request.Timings.Add("guess", scf.GuessSeconds);
+        request.Timings.Add("scf", scf.IterationSeconds);
+        return new CalcOutcome
+        {
+            Scf = scf,
+            TotalEnergyHartree = totalEnergyHartree,
+            MethodLabel = methodLabel,
+            Converged = scf.Converged,
+            FailureMessage = scf.Converged ? null : ScfFailure(scf),
+        };
+    }
+
     /// <summary>A one-line message for an SCF that did not converge.</summary>
     public static string ScfFailure(ScfResult result)
     {

@@ -5,7 +5,7 @@ namespace Orbitarium.Shell.Calc;
 
 /// <summary>What a <see cref="ICalcMethod"/> returns: its SCF reference (for orbitals, charges and dipole), the total
 /// energy of the method, whether everything converged, and extra JSON keys and summary lines of its own.</summary>
-internal sealed class CalcOutcome
+internal sealed record CalcOutcome
 {
     /// <summary>The SCF (HF or KS) result underlying the method.</summary>
     public required ScfResult Scf { get; init; }

@@ -67,11 +67,8 @@ internal sealed class CorrelationCalcMethod(string name, string description) : I
             throw new OrbitariumInputException($"--states must be at least 1, got {states}.");
 
         var scf = request.Calculation.Run(reference, request.Progress, cancellationToken);
-        request.Timings.Add("integrals", scf.IntegralSeconds);
-        request.Timings.Add("guess", scf.GuessSeconds);
-        request.Timings.Add("scf", scf.IterationSeconds);
-        if (!scf.Converged)
-            return new CalcOutcome { Scf = scf, TotalEnergyHartree = scf.TotalEnergyHartree, MethodLabel = label, Converged = false, FailureMessage = CalcMethods.ScfFailure(scf) };
+        var scfOutcome = CalcMethods.FromScf(request, scf, scf.TotalEnergyHartree, label);
+        if (!scf.Converged) return scfOutcome;
 
         var c = CultureInfo.InvariantCulture;
         var json = new List<KeyValuePair<string, JsonNode?>>();

@@ -25,16 +25,6 @@ internal sealed class HartreeFockCalcMethod(ScfReference reference) : ICalcMetho
     public CalcOutcome Run(CalcRequest request, CancellationToken cancellationToken)
     {
         var result = request.Calculation.Run(reference, request.Progress, cancellationToken);
-        request.Timings.Add("integrals", result.IntegralSeconds);
-        request.Timings.Add("guess", result.GuessSeconds);
-        request.Timings.Add("scf", result.IterationSeconds);
-        return new CalcOutcome
-        {
-            Scf = result,
-            TotalEnergyHartree = result.TotalEnergyHartree,
-            MethodLabel = result.MethodName,
-            Converged = result.Converged,
-            FailureMessage = result.Converged ? null : CalcMethods.ScfFailure(result),
-        };
+        return CalcMethods.FromScf(request, result, result.TotalEnergyHartree, result.MethodName);
     }
 }

@@ -51,16 +51,8 @@ internal sealed class KohnShamCalcMethod(string functionalName) : ICalcMethod
             ? request.Calculation.RunUks(functional, grid, request.Progress, cancellationToken)
             : request.Calculation.RunRks(functional, grid, request.Progress, cancellationToken);
         var scf = result.Scf;
-        request.Timings.Add("integrals", scf.IntegralSeconds);
-        request.Timings.Add("guess", scf.GuessSeconds);
-        request.Timings.Add("scf", scf.IterationSeconds);
-        return new CalcOutcome
+        return CalcMethods.FromScf(request, scf, result.TotalEnergyHartree, result.MethodName) with
         {
-            Scf = scf,
-            TotalEnergyHartree = result.TotalEnergyHartree,
-            MethodLabel = result.MethodName,
-            Converged = result.Converged,
-            FailureMessage = result.Converged ? null : CalcMethods.ScfFailure(scf),
             ExtraJson =
             [
                 new("functional", result.Functional.Name),

@@ -23,9 +23,9 @@ namespace Orbitarium.Geometry.Gradients;
 /// The neglected weight derivatives make the result differ from the derivative of the grid energy by a grid-dependent
 /// amount, and make Σ_A g_A deviate slightly from zero. Measured against central finite differences (h = 1e-3 bohr) on
 /// the <see cref="GridLevel.Fine"/> grid, 6-31G (tests KohnShamGradientTests): distorted water, largest component error
-/// 2.4e-7 (SVWN5), 1.8e-7 (PBE), 1.7e-7 (B3LYP) Eh/bohr, net force ≤ 2.9e-7 Eh/bohr; UKS/B3LYP distorted triplet CH2
-/// 1.6e-7 Eh/bohr, net force 9e-8 Eh/bohr.
-/// On coarser grids the error grows (common practice: use at least the Default grid for optimisations).
+/// 2.4e-7 (SVWN5), 1.8e-7 (PBE; also in 6-31G* with Cartesian d), 1.7e-7 (B3LYP) Eh/bohr, net force ≤ 2.9e-7 Eh/bohr;
+/// UKS/B3LYP distorted triplet CH2 1.6e-7 Eh/bohr, net force 9e-8 Eh/bohr. These include the finite-difference
+/// truncation (~1e-7); the weight-derivative error is expected to grow on coarser grids (not measured here).
 /// Source for the rest: J. A. Pople, P. M. W. Gill and B. G. Johnson, Chem. Phys. Lett. 199, 557 (1992).
 /// </remarks>
 public static class KohnShamGradient

@@ -7,7 +7,7 @@ namespace Orbitarium.Shell.Calc;
 
 /// <summary>Any <c>calc</c> method as a potential-energy surface for <c>--task optimize|frequencies</c>: the method runs
 /// at each geometry (its SCF started from the last converged orbitals); when the method's energy is a Hartree–Fock
-/// RHF/UHF energy the analytic gradient is used, otherwise the geometry code takes finite differences.</summary>
+/// RHF/UHF energy or a Kohn–Sham (RKS/UKS) energy the analytic gradient is used, otherwise the geometry code takes finite differences.</summary>
 internal sealed class CalcMethodSurface(ICalcMethod method, CalcRequest template) : IPotentialEnergySurface
 {
     private readonly object _gate = new();
@@ -17,7 +17,8 @@ internal sealed class CalcMethodSurface(ICalcMethod method, CalcRequest template
     public string MethodName => $"{method.Names[0].ToUpperInvariant()}/{template.BasisName}";
 
     /// <inheritdoc />
-    public bool HasAnalyticGradient => method.Names[0] is "rhf" or "uhf" && template.Calculation.Options.ExchangeCorrelation is null;
+    public bool HasAnalyticGradient =>
+        (method.Names[0] is "rhf" or "uhf" && template.Calculation.Options.ExchangeCorrelation is null) || method is KohnShamCalcMethod;
 
     /// <summary>Runs the method at <paramref name="molecule"/> and returns the request and outcome (used for the final report).</summary>
     public (CalcRequest Request, CalcOutcome Outcome) Run(Molecule molecule, CancellationToken cancellationToken)
@@ -50,6 +51,9 @@ internal sealed class CalcMethodSurface(ICalcMethod method, CalcRequest template
         bool energyIsScf = outcome.TotalEnergyHartree == outcome.Scf.TotalEnergyHartree;
         if (withGradient && HasAnalyticGradient && energyIsScf && HartreeFockGradient.IsAvailable(outcome.Scf))
             return new SurfacePoint(molecule, outcome.TotalEnergyHartree, [.. HartreeFockGradient.Compute(outcome.Scf, cancellationToken)],
+                GradientSource.Analytic, dipole);
+        if (withGradient && HasAnalyticGradient && energyIsScf && KohnShamGradient.IsAvailable(outcome.Scf))
+            return new SurfacePoint(molecule, outcome.TotalEnergyHartree, [.. KohnShamGradient.Compute(outcome.Scf, cancellationToken)],
                 GradientSource.Analytic, dipole);
         return SurfacePoint.EnergyOnly(molecule, outcome.TotalEnergyHartree, dipole);
     }

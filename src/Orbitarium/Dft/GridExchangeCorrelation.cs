@@ -65,7 +65,12 @@ public sealed class GridExchangeCorrelation : IExchangeCorrelationPotential
     public ExchangeCorrelationContribution? LastContribution { get; private set; }
 
     /// <summary>Builds (or reuses) the grid and basis screening for <paramref name="basis"/>.</summary>
-    public MolecularGrid GridFor(MolecularBasis basis, CancellationToken cancellationToken = default)
+    public MolecularGrid GridFor(MolecularBasis basis, CancellationToken cancellationToken = default) =>
+        GridAndBatches(basis, cancellationToken).Grid;
+
+    // Grid and screening read together under the lock, so concurrent evaluations at different geometries (parallel
+    // finite differences) never pair one geometry's grid with another's screening.
+    private (MolecularGrid Grid, BatchBasis[] Batches) GridAndBatches(MolecularBasis basis, CancellationToken cancellationToken)
     {
         ArgumentNullException.ThrowIfNull(basis);
         lock (_gate)
@@ -79,7 +84,7 @@ public sealed class GridExchangeCorrelation : IExchangeCorrelationPotential
                 _grid = grid;
                 _cachedBasis = basis;
             }
-            return _grid;
+            return (_grid, _batchBases);
         }
     }
 
@@ -93,9 +98,7 @@ public sealed class GridExchangeCorrelation : IExchangeCorrelationPotential
         int n = basis.FunctionCount;
         if (densityAlpha.RowCount != n || densityAlpha.ColumnCount != n || densityBeta.RowCount != n || densityBeta.ColumnCount != n)
             throw new ArgumentException($"Density matrices must be {n}x{n} for this basis; got {densityAlpha.RowCount}x{densityAlpha.ColumnCount} and {densityBeta.RowCount}x{densityBeta.ColumnCount}.");
-        var grid = GridFor(basis, cancellationToken);
-        BatchBasis[] batchBases;
-        lock (_gate) batchBases = _batchBases!;
+        var (grid, batchBases) = GridAndBatches(basis, cancellationToken);
         var da = densityAlpha.ToArray();
         var db = densityBeta.ToArray();
         int maxFunctions = 0;

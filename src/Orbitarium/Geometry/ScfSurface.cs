@@ -8,7 +8,9 @@ namespace Orbitarium.Geometry;
 /// <summary>
 /// A Hartree–Fock or Kohn–Sham calculation as a potential-energy surface: each geometry runs an SCF (started from the
 /// orbitals of the last converged point), returns its energy, its dipole (about the origin), and for RHF/UHF the
-/// analytic gradient (<see cref="HartreeFockGradient"/>); ROHF and Kohn–Sham report finite-difference gradients.
+/// analytic gradient (<see cref="HartreeFockGradient"/>), for RKS/UKS with a grid functional the analytic gradient of
+/// <see cref="KohnShamGradient"/> (grid-weight derivatives neglected; see there for the measured error); ROHF reports
+/// finite-difference gradients.
 /// </summary>
 public sealed class ScfSurface : IPotentialEnergySurface
 {
@@ -35,7 +37,7 @@ public sealed class ScfSurface : IPotentialEnergySurface
 
     /// <inheritdoc />
     public bool HasAnalyticGradient =>
-        _calculation.Options.ExchangeCorrelation is null && Reference is ScfReference.Restricted or ScfReference.Unrestricted;
+        _calculation.Options.ExchangeCorrelation is null or Dft.GridExchangeCorrelation && Reference is ScfReference.Restricted or ScfReference.Unrestricted;
 
     /// <summary>The SCF result of the most recent geometry evaluated with a gradient (null before the first).</summary>
     public ScfResult? LastResult { get; private set; }
@@ -58,7 +60,7 @@ public sealed class ScfSurface : IPotentialEnergySurface
         var dipole = MultipoleMoments.Compute(result, Vector3D.Zero).DipoleAtomicUnits;
         if (withGradient && HasAnalyticGradient)
         {
-            var g = HartreeFockGradient.Compute(result, cancellationToken);
+            var g = KohnShamGradient.IsAvailable(result) ? KohnShamGradient.Compute(result, cancellationToken) : HartreeFockGradient.Compute(result, cancellationToken);
             lock (_gate) { _seed = result; LastResult = result; }
             return new SurfacePoint(molecule, result.TotalEnergyHartree, [.. g], GradientSource.Analytic, dipole);
         }

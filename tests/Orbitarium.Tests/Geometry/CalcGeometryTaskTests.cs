@@ -42,6 +42,19 @@ public class CalcGeometryTaskTests
     }
 
     [Fact]
+    public void Kohn_sham_optimisation_uses_the_analytic_gradient()
+    {
+        // Wiring check: RKS methods now report analytic gradients (KohnShamGradient), and the optimiser converges with them.
+        var (code, text, err) = Calc("-g", ScfTestSystems.Example("tg7-dihydrogen.xyz"), "-b", "STO-3G", "-m", "svwn5",
+            "--task", "optimize", "--json");
+        Assert.True(code == 0, err);
+        using var json = JsonDocument.Parse(text);
+        var root = json.RootElement;
+        Assert.Equal("analytic", root.GetProperty("gradient_source").GetString());
+        Assert.True(root.GetProperty("optimization").GetProperty("converged").GetBoolean());
+    }
+
+    [Fact]
     public void A_step_limit_gives_exit_code_3_and_still_writes_the_best_geometry()
     {
         string path = TempXyz();

@@ -10,7 +10,7 @@ namespace Orbitarium.Geometry.Gradients;
 /// </summary>
 /// <remarks>Source: J. A. Pople, R. Krishnan, H. B. Schlegel and J. S. Binkley, Int. J. Quantum Chem. Symp. 13, 225
 /// (1979); P. Pulay, Mol. Phys. 17, 197 (1969). Valid for converged RHF and UHF (the orbitals make the energy stationary,
-/// so no orbital response is needed); ROHF and Kohn–Sham fall back to finite differences.</remarks>
+/// so no orbital response is needed); ROHF falls back to finite differences, and RKS/UKS use <see cref="KohnShamGradient"/>.</remarks>
 public static class HartreeFockGradient
 {
     /// <summary>Whether an analytic gradient is available for this result: a Hartree–Fock (no functional) RHF or UHF run.</summary>

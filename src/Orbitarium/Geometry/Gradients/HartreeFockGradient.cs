@@ -29,19 +29,22 @@ public static class HartreeFockGradient
             throw new InvalidOperationException("The SCF is not converged; a gradient of an unconverged energy would be meaningless. Converge it first.");
         if (!IsAvailable(result))
             throw new InvalidOperationException($"No analytic gradient for {result.MethodName}; use finite differences (FiniteDifferenceGradient).");
+        return SelfConsistentFieldTerms(result, 1.0, cancellationToken);
+    }
+
+    /// <summary>Every gradient term of an SCF energy except exchange–correlation: one-electron, Coulomb, the given
+    /// fraction of exact exchange, nuclear repulsion and the energy-weighted-density (overlap) term; hartree/bohr.</summary>
+    internal static double[] SelfConsistentFieldTerms(ScfResult result, double exactExchangeFraction, CancellationToken cancellationToken)
+    {
         var basis = result.Basis;
-        var w = EnergyWeightedDensity(result);
         var d = result.DensityTotal;
-        var parts = new[]
-        {
-            DerivativeIntegrals.Kinetic(basis, d),
-            DerivativeIntegrals.NuclearAttraction(basis, d, cancellationToken),
-            DerivativeIntegrals.TwoElectron(basis, result.DensityAlpha, result.DensityBeta, 1.0, cancellationToken),
-            DerivativeIntegrals.NuclearRepulsion(result.Molecule),
-        };
-        var overlap = DerivativeIntegrals.Overlap(basis, w);
+        var kinetic = DerivativeIntegrals.Kinetic(basis, d);
+        var nuclear = DerivativeIntegrals.NuclearAttraction(basis, d, cancellationToken);
+        var twoElectron = DerivativeIntegrals.TwoElectron(basis, result.DensityAlpha, result.DensityBeta, exactExchangeFraction, cancellationToken);
+        var repulsion = DerivativeIntegrals.NuclearRepulsion(result.Molecule);
+        var overlap = DerivativeIntegrals.Overlap(basis, EnergyWeightedDensity(result));
         var g = new double[overlap.Length];
-        for (int i = 0; i < g.Length; i++) g[i] = parts[0][i] + parts[1][i] + parts[2][i] + parts[3][i] - overlap[i];
+        for (int i = 0; i < g.Length; i++) g[i] = kinetic[i] + nuclear[i] + twoElectron[i] + repulsion[i] - overlap[i];
         return g;
     }
 

@@ -46,20 +46,10 @@ public static class KohnShamGradient
             throw new InvalidOperationException("The SCF is not converged; a gradient of an unconverged energy would be meaningless. Converge it first.");
         if (!IsAvailable(result) || result.Options.ExchangeCorrelation is not GridExchangeCorrelation xc)
             throw new InvalidOperationException($"No analytic Kohn–Sham gradient for {result.MethodName}; use finite differences (FiniteDifferenceGradient).");
-        var basis = result.Basis;
-        var w = HartreeFockGradient.EnergyWeightedDensity(result);
-        var d = result.DensityTotal;
-        var parts = new[]
-        {
-            DerivativeIntegrals.Kinetic(basis, d),
-            DerivativeIntegrals.NuclearAttraction(basis, d, cancellationToken),
-            DerivativeIntegrals.TwoElectron(basis, result.DensityAlpha, result.DensityBeta, xc.ExactExchangeFraction, cancellationToken),
-            DerivativeIntegrals.NuclearRepulsion(result.Molecule),
-            ExchangeCorrelation(xc, basis, result.DensityAlpha, result.DensityBeta, result.Reference == ScfReference.Unrestricted, cancellationToken),
-        };
-        var overlap = DerivativeIntegrals.Overlap(basis, w);
-        var g = new double[overlap.Length];
-        for (int i = 0; i < g.Length; i++) g[i] = parts[0][i] + parts[1][i] + parts[2][i] + parts[3][i] + parts[4][i] - overlap[i];
+        var g = HartreeFockGradient.SelfConsistentFieldTerms(result, xc.ExactExchangeFraction, cancellationToken);
+        var exchangeCorrelation = ExchangeCorrelation(xc, result.Basis, result.DensityAlpha, result.DensityBeta,
+            result.Reference == ScfReference.Unrestricted, cancellationToken);
+        for (int i = 0; i < g.Length; i++) g[i] += exchangeCorrelation[i];
         return g;
     }
 

@@ -25,8 +25,7 @@ public static class KohnShamCalculationExtensions
         IProgress<ScfIteration>? progress = null, CancellationToken cancellationToken = default)
     {
         ArgumentNullException.ThrowIfNull(functional);
-        var f = FunctionalRegistry.Get(functional);
-        return calculation.RunKohnSham(f, new GridExchangeCorrelation(f, grid), ScfReference.Restricted, progress, cancellationToken);
+        return calculation.RunRks(FunctionalRegistry.Get(functional), grid, progress, cancellationToken);
     }
 
     /// <summary>Runs restricted Kohn–Sham with a functional object (e.g. one made with <see cref="ExchangeCorrelationFunctional.Parse"/>).</summary>
@@ -47,8 +46,7 @@ public static class KohnShamCalculationExtensions
         IProgress<ScfIteration>? progress = null, CancellationToken cancellationToken = default)
     {
         ArgumentNullException.ThrowIfNull(functional);
-        var f = FunctionalRegistry.Get(functional);
-        return calculation.RunKohnSham(f, new GridExchangeCorrelation(f, grid), ScfReference.Unrestricted, progress, cancellationToken);
+        return calculation.RunUks(FunctionalRegistry.Get(functional), grid, progress, cancellationToken);
     }
 
     /// <summary>Runs unrestricted Kohn–Sham with a functional object.</summary>

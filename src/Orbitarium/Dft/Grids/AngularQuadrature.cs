@@ -10,7 +10,8 @@ namespace Orbitarium.Dft.Grids;
 /// <remarks>The product rule needs no tables: ⌈(L+1)/2⌉ Gauss–Legendre nodes in cos θ integrate the polynomial part
 /// (degree ≤ L) exactly, and L+1 equally spaced φ integrate e^{imφ} for |m| ≤ L exactly. (Stroud,
 /// <i>Approximate Calculation of Multiple Integrals</i>, 1971, §2.6; common practice.) It uses about 1.5× the points of
-/// a Lebedev rule of the same degree. The polar axis of the rule is (1, 1, 1)/√3, not z.</remarks>
+/// a Lebedev rule of the same degree. The polar axis of the rule is z; <see cref="MolecularGrid"/> lays it out in a
+/// frame fixed to the molecule.</remarks>
 public sealed class AngularQuadrature
 {
     private static readonly ConcurrentDictionary<int, AngularQuadrature> s_cache = new();
@@ -43,19 +44,6 @@ public sealed class AngularQuadrature
         return s_cache.GetOrAdd(degree, Build);
     }
 
-    // The product rule is densest near its poles and sparsest on its equator. Its polar axis is turned from z to
-    // (1, 1, 1)/√3 so that the coordinate planes, where planar molecules usually lie, are not equatorial.
-    private static readonly Vector3D s_axis = new Vector3D(1, 1, 1).Normalized();
-
-    private static Vector3D Tilt(Vector3D v)
-    {
-        // Rodrigues rotation taking e_z to s_axis: about k = e_z × n, by the angle between e_z and n.
-        var k = Vector3D.Cross(new Vector3D(0, 0, 1), s_axis);
-        double sin = k.Length, cos = s_axis.Z;
-        k = k / sin;
-        return cos * v + sin * Vector3D.Cross(k, v) + (1 - cos) * Vector3D.Dot(k, v) * k;
-    }
-
     private static AngularQuadrature Build(int degree)
     {
         int nTheta = (degree + 2) / 2;
@@ -71,7 +59,7 @@ public sealed class AngularQuadrature
             {
                 // offset φ by half a step so that no node sits on a symmetry plane of a planar molecule by construction
                 double phi = 2 * Math.PI * (j + 0.5) / nPhi;
-                dirs[k] = Tilt(new Vector3D(st * Math.Cos(phi), st * Math.Sin(phi), ct));
+                dirs[k] = new Vector3D(st * Math.Cos(phi), st * Math.Sin(phi), ct);
                 wts[k] = w[i] * 2 * Math.PI / nPhi;
                 k++;
             }

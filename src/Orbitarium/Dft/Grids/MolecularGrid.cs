@@ -9,7 +9,9 @@ namespace Orbitarium.Dft.Grids;
 /// weights and grouped into spatially compact batches.
 /// </summary>
 /// <remarks>∫ f(r) d³r ≈ Σ_p w_p f(r_p). Radial: <see cref="TreutlerAhlrichsRadialQuadrature"/>; angular:
-/// <see cref="AngularQuadrature"/>; partition: Becke, J. Chem. Phys. 88, 2547 (1988). Immutable.</remarks>
+/// <see cref="AngularQuadrature"/>, laid out in a frame fixed to the molecule (principal axes of the nuclear charge;
+/// the polar axis on the molecular axis for a linear molecule), so that the grid turns with the molecule and keeps
+/// a linear molecule's cylindrical symmetry; partition: Becke, J. Chem. Phys. 88, 2547 (1988). Immutable.</remarks>
 public sealed class MolecularGrid
 {
     /// <summary>Target number of points per batch (at most this many).</summary>
@@ -80,6 +82,7 @@ public sealed class MolecularGrid
         ArgumentNullException.ThrowIfNull(molecule);
         if (molecule.AtomCount == 0) throw new OrbitariumInputException("Cannot build a molecular grid for a molecule without atoms.");
         var partition = new BeckePartition(molecule);
+        var orientation = GridOrientation.For(molecule);
         int n = molecule.AtomCount;
         var perAtomPoints = new List<Vector3D>[n];
         var perAtomWeights = new List<double>[n];
@@ -102,7 +105,7 @@ public sealed class MolecularGrid
                 raw += dirs.Count;
                 for (int k = 0; k < dirs.Count; k++)
                 {
-                    var p = atom.PositionBohr + radii[i] * dirs[k];
+                    var p = atom.PositionBohr + radii[i] * orientation.Apply(dirs[k]);
                     double w = rw[i] * aw[k];
                     if (Math.Abs(w) < spec.WeightThreshold) continue;
                     w *= partition.Weight(a, p, scratch);

@@ -66,8 +66,9 @@ public class BuiltInBasisSetTests
         // Published contraction coefficients multiply normalised primitives and give a normalised function
         // (Hehre et al. 1969-1972; Dunning 1989): Σ cᵢcⱼ (2√(αᵢαⱼ)/(αᵢ+αⱼ))^{L+3/2} = 1 up to the rounding
         // of the printed digits. A transcription slip in an exponent or coefficient shows up here.
-        // Tolerance 2e-4: rounding of 6-7 printed digits gives about 1e-6; the largest accepted deviation
-        // (Ne 6-31G 2s, 1.0e-4) is noted in the file. Exception (from memory): the distributed He 6-31G
+        // Tolerance 2e-4: rounding of 6-7 printed digits gives about 1e-6, while a slip in one of the first four
+        // digits of a coefficient gives 1e-4 to 1e-2 (the recalled Ne 3-21G core failed by 1.6e-3, Ne 6-31G 2sp by
+        // 1.0e-4; both are corrected in their files). Exception (from memory): the distributed He 6-31G
         // contraction is not normalised as printed; Orbitarium renormalises every contraction exactly.
         var set = BasisSetLibrary.Get(name);
         foreach (int z in set.AtomicNumbers)

@@ -5,9 +5,20 @@ namespace Orbitarium.Scf;
 
 /// <summary>Builds the spin Fock (or Kohn–Sham) matrices and the energy parts from α and β densities.</summary>
 /// <remarks>F^σ = H + J[D^α + D^β] − x K[D^σ] + V_xc^σ, with x the exact-exchange fraction (1 for Hartree–Fock).
-/// E = Σ D·H + ½ Σ D·J − ½ x Σ_σ D^σ·K^σ + E_xc (Szabo &amp; Ostlund eqs. 3.184 and 3.348).</remarks>
-internal sealed class FockBuilder(MolecularBasis basis, ScfIntegrals integrals, IExchangeCorrelationPotential? xc, bool closedShell, bool spinPolarized)
+/// E = Σ D·H + ½ Σ D·J − ½ x Σ_σ D^σ·K^σ + E_xc (Szabo &amp; Ostlund eqs. 3.184 and 3.348).
+/// For an integral-direct kernel J and K are built incrementally (<see cref="IncrementalCoulombExchange"/>) unless
+/// <paramref name="incremental"/> is false.</remarks>
+internal sealed class FockBuilder(MolecularBasis basis, ScfIntegrals integrals, IExchangeCorrelationPotential? xc, bool closedShell, bool spinPolarized,
+    bool incremental = false)
 {
+    private readonly IncrementalCoulombExchange _coulombExchange = new(integrals.Kernel, incremental);
+
+    /// <summary>Whether the last build added J/K increments to stored matrices rather than building them in full.</summary>
+    public bool LastBuildWasIncremental => _coulombExchange.LastBuildWasIncremental;
+
+    /// <summary>Makes the next build a full one.</summary>
+    public void RequestFullBuild() => _coulombExchange.RequestFullBuild();
+
     public FockMatrices Build(Matrix<double> densityAlpha, Matrix<double> densityBeta, CancellationToken cancellationToken)
     {
         double x = xc?.ExactExchangeFraction ?? 1.0;
@@ -18,7 +29,7 @@ internal sealed class FockBuilder(MolecularBasis basis, ScfIntegrals integrals, 
         string? description = null;
         if (closedShell)
         {
-            var jk = integrals.Kernel.Build([densityAlpha], withExchange, cancellationToken);
+            var jk = _coulombExchange.Build([densityAlpha], withExchange, cancellationToken);
             var j = jk.Coulomb[0];
             fa = h + j.Multiply(2);
             e1 = 2 * Dot(densityAlpha, h);
@@ -40,7 +51,7 @@ internal sealed class FockBuilder(MolecularBasis basis, ScfIntegrals integrals, 
         }
         else
         {
-            var jk = integrals.Kernel.Build([densityAlpha, densityBeta], withExchange, cancellationToken);
+            var jk = _coulombExchange.Build([densityAlpha, densityBeta], withExchange, cancellationToken);
             var jt = jk.Coulomb[0] + jk.Coulomb[1];
             var dt = densityAlpha + densityBeta;
             fa = h + jt;

@@ -57,6 +57,12 @@ public sealed record ScfOptions
     /// <summary>Always recompute the two-electron integrals each iteration (integral-direct), whatever the memory budget. Default false.</summary>
     public bool ForceDirect { get; init; }
 
+    /// <summary>Integral-direct runs only: build J and K from the density change of each iteration and add them to the
+    /// previous matrices (Almlöf, Faegri &amp; Korsell, J. Comput. Chem. 3, 385 (1982)), with a full build every 8
+    /// iterations and before convergence is accepted. Faster as the density settles; off when
+    /// <see cref="Damping"/> is used. Default true.</summary>
+    public bool IncrementalDirectFock { get; init; } = true;
+
     /// <summary>The exchange–correlation functional for Kohn–Sham DFT, or null for Hartree–Fock (the default).
     /// The driver adds V_xc and E_xc and scales exact exchange by the functional's
     /// <see cref="IExchangeCorrelationPotential.ExactExchangeFraction"/>.</summary>

@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using System.Diagnostics;
 using MathNet.Numerics.LinearAlgebra;
 using Orbitarium.BasisSets;
+using Orbitarium.Integrals;
 
 namespace Orbitarium.Scf;
 
@@ -62,8 +63,9 @@ public static class SelfConsistentField
             throw new OrbitariumInputException(
                 $"The basis gives only {orth.OrbitalCount} orbitals, too few for {na} α electrons; use a larger basis set.");
         var state = new ScfState(s, orth.Transform, na, nb);
+        bool incremental = options.IncrementalDirectFock && options.Damping == 0 && integrals.Kernel is DirectCoulombExchangeKernel;
         var fockBuilder = new FockBuilder(basis, integrals, options.ExchangeCorrelation,
-            model.ClosedShellFockBuild, reference != ScfReference.Restricted);
+            model.ClosedShellFockBuild, reference != ScfReference.Restricted, incremental);
 
         // ---- starting guess: a Fock matrix pair whose eigenvectors are the first orbitals
         var clock = Stopwatch.StartNew();
@@ -109,7 +111,12 @@ public static class SelfConsistentField
 
             if (!double.IsFinite(energy) || !double.IsFinite(norm)) { stop = ScfStopReason.NumericalBreakdown; break; }
             if (iteration > 1 && Math.Abs(change) < options.EnergyThresholdHartree && norm < options.CommutatorThreshold)
-            { stop = ScfStopReason.Converged; break; }
+            {
+                if (!fockBuilder.LastBuildWasIncremental) { stop = ScfStopReason.Converged; break; }
+                // Increments carry screening errors: confirm on a full build of the same density before accepting.
+                fockBuilder.RequestFullBuild();
+                continue;
+            }
             if (iteration >= options.MaxIterations) { stop = ScfStopReason.MaximumIterationsReached; break; }
 
             previousAlpha = state.DensityAlpha;
@@ -162,7 +169,7 @@ public static class SelfConsistentField
             Overlap = s,
             CoreHamiltonian = integrals.CoreHamiltonian,
             SpinSquared = Math.Max(0, SpinSquared(state.CoefficientsAlpha, state.CoefficientsBeta, s, na, nb)),
-            IntegralMode = integrals.Kernel.Mode,
+            IntegralMode = incremental ? integrals.Kernel.Mode + ", incremental Fock builds" : integrals.Kernel.Mode,
             OrthogonalizationUsed = orth.KindUsed,
             DroppedLinearDependencies = orth.DroppedCount,
             IntegralSeconds = integrals.Seconds,

@@ -20,7 +20,7 @@ public class KohnShamBenchmarks
         _benzene = Molecule.FromXyzFile(Path.Combine(folder, "tgb-benzene.xyz")).WithBasis("6-31G*");
     }
 
-    private static string FindExamples()
+    internal static string FindExamples()
     {
         var dir = new DirectoryInfo(AppContext.BaseDirectory);
         while (dir is not null && !Directory.Exists(Path.Combine(dir.FullName, "examples"))) dir = dir.Parent;

@@ -85,6 +85,26 @@ public class SelfConsistentFieldTests
             Assert.Contains("direct", noMemory.IntegralMode);
             Assert.Equal(inCore.TotalEnergyHartree, direct.TotalEnergyHartree, 1e-9);
         }
+
+        [Fact]
+        public void Incremental_direct_Fock_builds_reach_the_energy_of_full_builds()
+        {
+            // J and K are linear in D, so adding J[ΔD], K[ΔD] each iteration must give the same converged energy as
+            // full builds (Almlöf, Faegri & Korsell 1982); the driver confirms convergence on a full build, so the
+            // energies agree to the SCF convergence (1e-9 Eh), for closed and open shells alike.
+            var radical = Molecule.FromXyz("2\nhydroxyl\nO 0 0 0\nH 0 0 0.97\n").WithMultiplicity(2).WithBasis("6-31G*");
+            foreach (var (calc, reference) in new[] { (WaterCalc(), ScfReference.Restricted), (radical, ScfReference.Unrestricted) })
+            {
+                var inCore = calc.Run(reference);
+                var incremental = calc.WithOptions(o => o with { ForceDirect = true }).Run(reference);
+                var full = calc.WithOptions(o => o with { ForceDirect = true, IncrementalDirectFock = false }).Run(reference);
+                Assert.True(incremental.Converged && full.Converged);
+                Assert.Contains("incremental", incremental.IntegralMode);
+                Assert.DoesNotContain("incremental", full.IntegralMode);
+                Assert.Equal(inCore.TotalEnergyHartree, incremental.TotalEnergyHartree, 1e-9);
+                Assert.Equal(full.TotalEnergyHartree, incremental.TotalEnergyHartree, 1e-9);
+            }
+        }
     }
 
     public class Cancellation

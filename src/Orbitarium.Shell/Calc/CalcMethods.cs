@@ -61,6 +61,7 @@ internal static class CalcMethods
             $" (last energy {last.EnergyHartree:F10} Eh, ΔE {last.EnergyChangeHartree:E2}, |FDS−SDF| {last.CommutatorNorm:E2})");
         return result.StopReason == ScfStopReason.NumericalBreakdown
             ? $"the SCF broke down numerically after {result.Iterations} iterations{detail}; check the geometry and basis."
-            : $"the SCF did not converge in {result.Iterations} iterations{detail}; no converged energy is available.";
+            : $"the SCF did not converge in {result.Iterations} iterations{detail}; no converged energy is available. " +
+              "If the energy oscillates, try --level-shift 0.2 (or ScfOptions.LevelShiftHartree at the prompt); if it is still falling, --max-iterations.";
     }
 }

@@ -106,7 +106,9 @@ internal sealed class CalcReport
         sb.Append(C, $"  two-electron integrals: {scf.IntegralMode}");
         if (scf.DroppedLinearDependencies > 0) sb.Append(C, $"; {scf.DroppedLinearDependencies} near-linear dependencies dropped");
         sb.Append('\n');
-        if (scf.Converged)
+        if (scf.StopReason == ScfStopReason.ConvergedGridLimited)
+            sb.Append(C, $"  SCF converged in {scf.Iterations} iterations (|ΔE| < {o.EnergyThresholdHartree:0e0} Eh for {o.QuietIterationsForGridLimit} iterations; max|FDS−SDF| {scf.History[^1].CommutatorNorm:0.0e0}, limited by the grid)\n");
+        else if (scf.Converged)
             sb.Append(C, $"  SCF converged in {scf.Iterations} iterations (|ΔE| < {o.EnergyThresholdHartree:0e0} Eh, max|FDS−SDF| < {o.CommutatorThreshold:0e0})\n");
         else
             sb.Append(C, $"  SCF NOT CONVERGED: {CalcMethods.ScfFailure(scf)}\n");

@@ -8,7 +8,7 @@ namespace Orbitarium.Shell.Commands;
 
 /// <summary>
 /// <c>orbitarium calc --geometry FILE.xyz --basis NAME --method NAME [--charge N] [--multiplicity M]
-/// [--units angstrom|bohr] [--json] [--output FILE] [--max-iterations N] [--task energy|optimize|frequencies]</c>: one calculation, a readable summary or
+/// [--units angstrom|bohr] [--json] [--output FILE] [--max-iterations N] [--level-shift EH] [--task energy|optimize|frequencies]</c>: one calculation, a readable summary or
 /// one JSON object. Exit codes: 0 success, 2 bad input (one line on stderr), 3 a solver did not converge.
 /// Methods come from <see cref="CalcMethods.All"/>.
 /// </summary>
@@ -42,13 +42,15 @@ internal static class CalcCommand
     { Description = "Write the summary or JSON to this file (atomically) instead of standard output." };
     private static readonly Option<int?> MaxIterations = new("--max-iterations")
     { Description = "Largest number of SCF iterations (default 128)." };
+    private static readonly Option<double?> LevelShift = new("--level-shift")
+    { Description = "SCF level shift in hartree added to virtual orbitals (default 0); 0.1–0.5 calms an oscillating open shell." };
 
     /// <summary>Builds the command for the root command of <c>orbitarium</c>.</summary>
     public static Command Create()
     {
         var cmd = new Command("calc", "Run one calculation on a geometry file and print a summary or JSON. " +
                                       "Exit codes: 0 success, 2 bad input, 3 not converged.");
-        foreach (var o in new Option[] { Geometry, Basis, Method, Charge, Multiplicity, Units, Json, Output, MaxIterations })
+        foreach (var o in new Option[] { Geometry, Basis, Method, Charge, Multiplicity, Units, Json, Output, MaxIterations, LevelShift })
             cmd.Options.Add(o);
         foreach (var o in CalcMethods.ExtraOptions) cmd.Options.Add(o);
         foreach (var o in new Option[] { GeometryCalcTask.Task, GeometryCalcTask.Temperature, GeometryCalcTask.Pressure, GeometryCalcTask.MaxSteps })
@@ -88,6 +90,12 @@ internal static class CalcCommand
             var basisSet = BasisSetLibrary.Get(basisName);
             var options = ScfOptions.Default;
             if (parse.GetValue(MaxIterations) is int max) options = options with { MaxIterations = max };
+            if (parse.GetValue(LevelShift) is double shift)
+            {
+                if (!(shift >= 0) || !double.IsFinite(shift))
+                    throw new OrbitariumInputException($"--level-shift {shift} must be a finite number ≥ 0 (hartree), e.g. 0.2.");
+                options = options with { LevelShiftHartree = shift };
+            }
             var calculation = timings.Measure("input", () => Calculation.Create(molecule, basisSet, null, options));
             var request = new CalcRequest
             {

@@ -21,6 +21,19 @@ public sealed record ScfOptions
     /// <summary>Convergence threshold on the largest element of FDS − SDF in the orthonormal basis, hartree. Default 1e-8.</summary>
     public double CommutatorThreshold { get; init; } = 1e-8;
 
+    /// <summary>Kohn–Sham only: an orbital gradient below this (hartree) is accepted once the energy has stayed within
+    /// <see cref="EnergyThresholdHartree"/> for <see cref="QuietIterationsForGridLimit"/> iterations in a row
+    /// (<see cref="ScfStopReason.ConvergedGridLimited"/>). A finite grid breaks the symmetry of degenerate open shells
+    /// slightly, leaving orbital rotations whose gradient (1e-7–1e-6 Eh for open-shell atoms at the default grid)
+    /// relaxes far too slowly to converge; the energy then depends on the direction of the shell only at the grid's
+    /// angular resolution (up to ~1e-6 Eh for the O atom at the default grid; use a finer grid for less). Default 1e-5;
+    /// 0 turns the rule off.</summary>
+    public double GridLimitedCommutatorThreshold { get; init; } = 1e-5;
+
+    /// <summary>Kohn–Sham only: consecutive iterations with |ΔE| below <see cref="EnergyThresholdHartree"/> needed before a
+    /// grid-limited gradient is accepted (<see cref="GridLimitedCommutatorThreshold"/>). Default 8.</summary>
+    public int QuietIterationsForGridLimit { get; init; } = 8;
+
     /// <summary>Number of Fock/error pairs kept by Pulay DIIS; 0 turns DIIS off. Default 8.</summary>
     public int DiisSubspaceSize { get; init; } = 8;
 

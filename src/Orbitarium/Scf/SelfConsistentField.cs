@@ -81,6 +81,8 @@ public static class SelfConsistentField
         var history = ImmutableArray.CreateBuilder<ScfIteration>();
         double enuc = molecule.NuclearRepulsionEnergyHartree;
         double previousEnergy = 0;
+        int quietIterations = 0;
+        bool gridBased = options.ExchangeCorrelation is not null && options.GridLimitedCommutatorThreshold > 0;
         Matrix<double>? previousAlpha = null, previousBeta = null;
         ScfStopReason stop;
         FockMatrices fock;
@@ -110,6 +112,10 @@ public static class SelfConsistentField
             previousEnergy = energy;
 
             if (!double.IsFinite(energy) || !double.IsFinite(norm)) { stop = ScfStopReason.NumericalBreakdown; break; }
+            quietIterations = iteration > 1 && Math.Abs(change) < options.EnergyThresholdHartree ? quietIterations + 1 : 0;
+            if (gridBased && quietIterations >= options.QuietIterationsForGridLimit && norm < options.GridLimitedCommutatorThreshold
+                && !fockBuilder.LastBuildWasIncremental)
+            { stop = ScfStopReason.ConvergedGridLimited; break; }
             if (iteration > 1 && Math.Abs(change) < options.EnergyThresholdHartree && norm < options.CommutatorThreshold)
             {
                 if (!fockBuilder.LastBuildWasIncremental) { stop = ScfStopReason.Converged; break; }

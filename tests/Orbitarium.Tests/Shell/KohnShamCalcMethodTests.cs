@@ -30,6 +30,28 @@ public class KohnShamCalcMethodTests
     }
 
     [Fact]
+    public void An_oscillating_radical_fails_with_advice_and_converges_with_the_advised_level_shift()
+    {
+        // NO (²Π) in SVWN5/6-31G*: the half-filled π* pair makes plain DIIS oscillate (|FDS − SDF| ~1e-2 after
+        // 128 iterations); a 0.2 Eh level shift (Saunders & Hillier 1973) damps it.
+        string xyz = Path.Combine(Path.GetTempPath(), $"orbitarium-no-{Guid.NewGuid():N}.xyz");
+        File.WriteAllText(xyz, "2\nnitric oxide\nN 0 0 0\nO 0 0 1.15\n");
+        try
+        {
+            var (code, _, err) = Calc("-g", xyz, "-b", "6-31G*", "-m", "svwn5", "--max-iterations", "60");
+            Assert.Equal(3, code);
+            Assert.Contains("--level-shift 0.2", err);
+            var (shifted, text, err2) = Calc("-g", xyz, "-b", "6-31G*", "-m", "svwn5", "--level-shift", "0.2");
+            Assert.True(shifted == 0, err2);
+            Assert.Contains("SCF converged", text);
+            var (bad, _, err3) = Calc("-g", xyz, "-b", "6-31G*", "-m", "svwn5", "--level-shift", "-1");
+            Assert.Equal(2, bad);
+            Assert.Contains("--level-shift", err3);
+        }
+        finally { File.Delete(xyz); }
+    }
+
+    [Fact]
     public void Given_an_unknown_grid_level_when_run_then_exit_code_2_names_the_levels()
     {
         var (code, _, err) = Calc("-g", ScfTestSystems.Example("tg1-water.xyz"), "-b", "STO-3G", "-m", "pbe", "--grid", "huge");

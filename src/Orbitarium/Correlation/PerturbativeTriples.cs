@@ -1,3 +1,5 @@
+using Orbitarium.Parallelism;
+
 namespace Orbitarium.Correlation;
 
 /// <summary>
@@ -45,9 +47,10 @@ internal static class PerturbativeTriples
                 for (int k = j + 1; k < o; k++)
                     triples.Add((i, j, k));
         double total = 0;
-        object gate = new();
-        Parallel.For(0, triples.Count, new ParallelOptions { CancellationToken = ct }, () => 0.0, (idx, _, local) =>
+        // Fixed interleaved sets summed in order, so the energy repeats to the last bit (FixedOrderParallel).
+        var partials = FixedOrderParallel.For(triples.Count, FixedOrderParallel.MaxSets, () => new double[1], (idx, sum) =>
         {
+            double local = 0;
             var (i, j, k) = triples[idx];
             Span<int> ps = [i, j, k, j, i, k, k, j, i];
             Span<double> psign = [1, -1, -1];
@@ -79,8 +82,9 @@ internal static class PerturbativeTriples
                         double d = dijk - f[(o + a) * n + o + a] - f[(o + b) * n + o + b] - f[(o + c) * n + o + c];
                         local += con * (con + dis) / d;
                     }
-            return local;
-        }, local => { lock (gate) total += local; });
+            sum[0] += local;
+        }, ct);
+        foreach (var sum in partials) total += sum[0];
         return total;
     }
 }

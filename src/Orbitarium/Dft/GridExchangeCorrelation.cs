@@ -4,6 +4,8 @@ using Orbitarium.Dft.Functionals;
 using Orbitarium.Dft.Grids;
 using Orbitarium.Scf;
 
+using Orbitarium.Parallelism;
+
 namespace Orbitarium.Dft;
 
 /// <summary>
@@ -103,17 +105,15 @@ public sealed class GridExchangeCorrelation : IExchangeCorrelationPotential
         var db = densityBeta.ToArray();
         int maxFunctions = 0;
         foreach (var bb in batchBases) maxFunctions = Math.Max(maxFunctions, bb.Functions.Length);
-        var totals = new List<BatchWorkspace>();
-        Parallel.For(0, grid.Batches.Length,
-            new ParallelOptions { CancellationToken = cancellationToken },
+        // Fixed interleaved batch sets reduced in order: the same run repeats to the last bit (FixedOrderParallel).
+        var totals = FixedOrderParallel.For(grid.Batches.Length,
+            FixedOrderParallel.SetCount((spinPolarized ? 16L : 8L) * n * n),
             () => new BatchWorkspace(n, maxFunctions, spinPolarized, Functional.IsGradientCorrected),
-            (b, _, ws) =>
+            (b, ws) =>
             {
                 var bb = batchBases[b];
                 if (bb.Basis is not null) ws.Process(grid, grid.Batches[b], bb, Functional, da, db);
-                return ws;
-            },
-            ws => { lock (totals) totals.Add(ws); });
+            }, cancellationToken);
         var va = new double[n, n];
         var vb = spinPolarized ? new double[n, n] : va;
         double energy = 0, electrons = 0;

@@ -1,6 +1,8 @@
 using MathNet.Numerics.LinearAlgebra;
 using Orbitarium.BasisSets;
 
+using Orbitarium.Parallelism;
+
 namespace Orbitarium.Integrals;
 
 /// <summary>
@@ -73,11 +75,11 @@ public sealed class DirectCoulombExchangeKernel : ICoulombExchangeKernel
         var jTotal = CoulombExchangeAccumulator.Zeros(dens.Length, n);
         var kTotal = withExchange ? CoulombExchangeAccumulator.Zeros(dens.Length, n) : null;
         long screened = 0, computed = 0;
-        var gate = new object();
-        Parallel.For(0, npairs, new ParallelOptions { CancellationToken = cancellationToken },
+        long bytesPerSet = (withExchange ? 16L : 8L) * dens.Length * n * n;
+        var partials = FixedOrderParallel.For(npairs, FixedOrderParallel.SetCount(bytesPerSet),
             () => (new ShellQuartetEvaluator.Worker(eval), CoulombExchangeAccumulator.Zeros(dens.Length, n),
                    withExchange ? CoulombExchangeAccumulator.Zeros(dens.Length, n) : null, new long[2]),
-            (index, _, acc) =>
+            (index, acc) =>
             {
                 int pq = npairs - 1 - index;
                 int p = pairP[pq], q = pairQ[pq];
@@ -106,18 +108,14 @@ public sealed class DirectCoulombExchangeKernel : ICoulombExchangeKernel
                                     CoulombExchangeAccumulator.Scatter(scale * v, op + i, oq + j, or + k, os + l, n, dens, acc.Item2, acc.Item3);
                                 }
                 }
-                return acc;
-            },
-            acc =>
-            {
-                lock (gate)
-                {
-                    CoulombExchangeAccumulator.AddInto(jTotal, acc.Item2);
-                    if (kTotal is not null && acc.Item3 is not null) CoulombExchangeAccumulator.AddInto(kTotal, acc.Item3);
-                    screened += acc.Item4[0];
-                    computed += acc.Item4[1];
-                }
-            });
+            }, cancellationToken);
+        foreach (var acc in partials)
+        {
+            CoulombExchangeAccumulator.AddInto(jTotal, acc.Item2);
+            if (kTotal is not null && acc.Item3 is not null) CoulombExchangeAccumulator.AddInto(kTotal, acc.Item3);
+            screened += acc.Item4[0];
+            computed += acc.Item4[1];
+        }
         LastScreenedShellQuartetCount = screened;
         LastComputedShellQuartetCount = computed;
         return new CoulombExchangeMatrices(

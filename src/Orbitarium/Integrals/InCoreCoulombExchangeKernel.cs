@@ -1,6 +1,8 @@
 using MathNet.Numerics.LinearAlgebra;
 using Orbitarium.BasisSets;
 
+using Orbitarium.Parallelism;
+
 namespace Orbitarium.Integrals;
 
 /// <summary>
@@ -38,11 +40,11 @@ public sealed class InCoreCoulombExchangeKernel : ICoulombExchangeKernel
             for (int j = 0; j <= i; j++, ij++) { pi[ij] = i; pj[ij] = j; }
         var jTotal = CoulombExchangeAccumulator.Zeros(dens.Length, n);
         var kTotal = withExchange ? CoulombExchangeAccumulator.Zeros(dens.Length, n) : null;
-        var gate = new object();
         var tensor = _tensor;
-        Parallel.For(0, m, new ParallelOptions { CancellationToken = cancellationToken },
+        long bytesPerSet = (withExchange ? 16L : 8L) * dens.Length * n * n;
+        var partials = FixedOrderParallel.For(m, FixedOrderParallel.SetCount(bytesPerSet),
             () => (CoulombExchangeAccumulator.Zeros(dens.Length, n), withExchange ? CoulombExchangeAccumulator.Zeros(dens.Length, n) : null),
-            (index, _, acc) =>
+            (index, acc) =>
             {
                 int ij = m - 1 - index;
                 var packed = tensor.Packed;
@@ -59,16 +61,12 @@ public sealed class InCoreCoulombExchangeKernel : ICoulombExchangeKernel
                     if (kl == ij) v *= 0.5;
                     CoulombExchangeAccumulator.Scatter(v, i, j, k, l, n, dens, acc.Item1, acc.Item2);
                 }
-                return acc;
-            },
-            acc =>
-            {
-                lock (gate)
-                {
-                    CoulombExchangeAccumulator.AddInto(jTotal, acc.Item1);
-                    if (kTotal is not null && acc.Item2 is not null) CoulombExchangeAccumulator.AddInto(kTotal, acc.Item2);
-                }
-            });
+            }, cancellationToken);
+        foreach (var acc in partials)
+        {
+            CoulombExchangeAccumulator.AddInto(jTotal, acc.Item1);
+            if (kTotal is not null && acc.Item2 is not null) CoulombExchangeAccumulator.AddInto(kTotal, acc.Item2);
+        }
         return new CoulombExchangeMatrices(
             CoulombExchangeAccumulator.Symmetrised(jTotal, n),
             kTotal is null ? null : CoulombExchangeAccumulator.Symmetrised(kTotal, n));

@@ -2,6 +2,7 @@ using MathNet.Numerics.LinearAlgebra;
 using Orbitarium.BasisSets;
 using Orbitarium.Chemistry;
 using Orbitarium.Integrals;
+using Orbitarium.Parallelism;
 
 namespace Orbitarium.Geometry.Gradients;
 
@@ -72,9 +73,7 @@ public static class DerivativeIntegrals
         for (int a = 0; a < ns; a++)
             for (int b = 0; b <= a; b++) pairs.Add((a, b));
         var total = new double[3 * natoms];
-        object gate = new();
-        var options = new ParallelOptions { CancellationToken = cancellationToken, MaxDegreeOfParallelism = Environment.ProcessorCount };
-        Parallel.For(0, pairs.Count, options, () => new QuartetWorkspace(3 * natoms), (p, _, ws) =>
+        var partials = FixedOrderParallel.For(pairs.Count, FixedOrderParallel.MaxSets, () => new QuartetWorkspace(3 * natoms), (p, ws) =>
         {
             var (a, b) = pairs[p];
             for (int q = 0; q <= p; q++)
@@ -83,11 +82,9 @@ public static class DerivativeIntegrals
                 double deg = (a == b ? 1 : 2) * (c == d ? 1 : 2) * (p == q ? 1 : 2);
                 ws.Quartet(shells, a, b, c, d, dt, da, db, nc, exchangeFraction, 0.5 * deg);
             }
-            return ws;
-        }, ws =>
-        {
-            lock (gate) for (int i = 0; i < total.Length; i++) total[i] += ws.Gradient[i];
-        });
+        }, cancellationToken);
+        foreach (var ws in partials)
+            for (int i = 0; i < total.Length; i++) total[i] += ws.Gradient[i];
         return total;
     }
 

@@ -4,6 +4,7 @@ using Orbitarium.Chemistry;
 using Orbitarium.Dft;
 using Orbitarium.Dft.Functionals;
 using Orbitarium.Dft.Grids;
+using Orbitarium.Parallelism;
 using Orbitarium.Scf;
 
 namespace Orbitarium.Geometry.Gradients;
@@ -77,15 +78,15 @@ public static class KohnShamGradient
         int atoms = basis.Molecule.AtomCount;
         var total = new double[3 * atoms];
         var functional = xc.Functional;
-        Parallel.For(0, grid.Batches.Length, new ParallelOptions { CancellationToken = cancellationToken },
+        var partials = FixedOrderParallel.For(grid.Batches.Length, FixedOrderParallel.MaxSets,
             () => new XcGradientWorkspace(atoms, maxFunctions, spinPolarized, functional.IsGradientCorrected),
-            (b, _, ws) =>
+            (b, ws) =>
             {
                 var bb = batchBases[b];
                 if (bb.Basis is not null) ws.Process(grid, grid.Batches[b], bb, basis, functional, da, db);
-                return ws;
-            },
-            ws => { lock (total) for (int i = 0; i < total.Length; i++) total[i] += ws.Gradient[i]; });
+            }, cancellationToken);
+        foreach (var ws in partials)
+            for (int i = 0; i < total.Length; i++) total[i] += ws.Gradient[i];
         return total;
     }
 }

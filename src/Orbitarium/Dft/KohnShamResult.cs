@@ -1,5 +1,6 @@
 using System.Globalization;
 using System.Text;
+using Orbitarium.Chemistry;
 using Orbitarium.Dft.Functionals;
 using Orbitarium.Dft.Grids;
 using Orbitarium.Scf;
@@ -24,6 +25,9 @@ public sealed class KohnShamResult
 
     /// <summary>The underlying SCF result.</summary>
     public ScfResult Scf { get; }
+
+    /// <summary>The molecule (same as <c>Scf.Molecule</c>).</summary>
+    public Molecule Molecule => Scf.Molecule;
 
     /// <summary>The functional.</summary>
     public ExchangeCorrelationFunctional Functional { get; }
@@ -62,7 +66,7 @@ public sealed class KohnShamResult
         var c = CultureInfo.InvariantCulture;
         var sb = new StringBuilder();
         sb.Append(c, $"{MethodName}/{Scf.Basis.Name}  {Scf.Molecule.Formula}\n");
-        sb.Append(c, $"  {(Converged ? $"converged in {Scf.Iterations} iterations" : $"NOT CONVERGED ({Scf.StopReason}) after {Scf.Iterations} iterations")}\n");
+        sb.Append(c, $"  {Scf.ConvergenceDescription}\n");
         sb.Append(c, $"  total energy          {TotalEnergyHartree,20:F10} Eh\n");
         sb.Append(c, $"  exchange-correlation  {ExchangeCorrelationEnergyHartree,20:F10} Eh   (exact exchange fraction {Functional.ExactExchangeFraction:0.###})\n");
         sb.Append(c, $"  {Grid.Description}\n");

@@ -50,6 +50,16 @@ public sealed class ScfResult
     /// <summary>Whether the run met both convergence thresholds.</summary>
     public bool Converged => StopReason is ScfStopReason.Converged or ScfStopReason.ConvergedGridLimited;
 
+    /// <summary>One line on how the iterations ended, e.g. "converged in 11 iterations", "converged in 14 iterations;
+    /// orbital gradient 1.2E-006 Eh is grid-limited" or "NOT CONVERGED (MaximumIterationsReached) after 128 iterations".</summary>
+    public string ConvergenceDescription => StopReason switch
+    {
+        ScfStopReason.Converged => FormattableString.Invariant($"converged in {Iterations} iterations"),
+        ScfStopReason.ConvergedGridLimited => FormattableString.Invariant(
+            $"converged in {Iterations} iterations; orbital gradient {History[^1].CommutatorNorm:0.0E+0} Eh is grid-limited"),
+        _ => FormattableString.Invariant($"NOT CONVERGED ({StopReason}) after {Iterations} iterations"),
+    };
+
     /// <summary>Why the iterations stopped.</summary>
     public required ScfStopReason StopReason { get; init; }
 
@@ -219,9 +229,7 @@ public sealed class ScfResult
         sb.Append(c, $"{MethodName}/{Basis.Name} on {Molecule.Formula} (charge {Molecule.Charge}, multiplicity {Molecule.Multiplicity}, {Basis.FunctionCount} basis functions)\n");
         sb.Append(c, $"  total energy       {TotalEnergyHartree,20:F10} Eh\n");
         sb.Append(c, $"  nuclear repulsion  {NuclearRepulsionHartree,20:F10} Eh\n");
-        if (StopReason == ScfStopReason.ConvergedGridLimited)
-            sb.Append(c, $"  converged in {Iterations} iterations ({IntegralMode}); orbital gradient {History[^1].CommutatorNorm:E1} is grid-limited\n");
-        else if (Converged) sb.Append(c, $"  converged in {Iterations} iterations ({IntegralMode})\n");
+        if (Converged) sb.Append(c, $"  {ConvergenceDescription} ({IntegralMode})\n");
         else sb.Append(c, $"  NOT CONVERGED: {StopReason} after {Iterations} iterations; the energy is the last iterate's (an oscillating open shell usually converges with ScfOptions.LevelShiftHartree = 0.2)\n");
         if (Reference != ScfReference.Restricted) sb.Append(c, $"  <S^2> = {SpinSquared:F6} (pure state {ExpectedSpinSquared:F4})\n");
         if (HomoEnergyHartree is double h) sb.Append(c, $"  HOMO {h:F6} Eh");

@@ -43,7 +43,7 @@ public static class ScfResultRenderer
         if (r.GapElectronVolt is double gap) Row("gap", F(gap, "F4"), "eV");
 
         string status = r.Converged
-            ? $"[green]converged[/] in {r.Iterations} iterations"
+            ? $"[green]converged[/]{Markup.Escape(r.ConvergenceDescription["converged".Length..])}"
             : $"[bold red]NOT CONVERGED[/] ({Markup.Escape(r.StopReason.ToString())}) after {r.Iterations} iterations — the energy is the last iterate's, not a result";
         string timing = string.Create(CultureInfo.InvariantCulture,
             $"integrals {r.IntegralSeconds:F2} s · guess {r.GuessSeconds:F2} s · iterations {r.IterationSeconds:F2} s · {r.IntegralMode}");

@@ -106,16 +106,12 @@ public class CorrelationConsistentLithiumBerylliumTests
     /// exponent that would lower the energy most.</summary>
     private static double[] NewtonSteps(double[] exponents, Func<double[], double> energy)
     {
-        const double step = 0.01;
         double e0 = energy(exponents);
         var result = new double[exponents.Length];
         for (int i = 0; i < exponents.Length; i++)
         {
             double[] Shifted(double x) { var c = (double[])exponents.Clone(); c[i] *= Math.Exp(x); return c; }
-            double ep = energy(Shifted(step)), em = energy(Shifted(-step));
-            double g = (ep - em) / (2 * step), curvature = (ep - 2 * e0 + em) / (step * step);
-            Assert.True(curvature > 0, $"exponent {exponents[i]}: energy is not at a minimum along it");
-            result[i] = -g / curvature;
+            result[i] = ExponentStationarity.ShiftToMinimum(x => energy(Shifted(x)), 0.01, $"exponent {exponents[i]}", e0);
         }
         return result;
     }

@@ -34,16 +34,8 @@ public class PopleStationarityTests
     }
 
     /// <summary>Predicted relative shift −g/H of one exponent to the minimum of <paramref name="energy"/>.</summary>
-    private static double ShiftToMinimum(BasisSet set, Element element, double exponent, Func<BasisSet, double> energy)
-    {
-        double e0 = energy(set);
-        double ePlus = energy(Scaled(set, element, exponent, Math.Exp(StepLn)));
-        double eMinus = energy(Scaled(set, element, exponent, Math.Exp(-StepLn)));
-        double slope = (ePlus - eMinus) / (2 * StepLn);
-        double curvature = (ePlus - 2 * e0 + eMinus) / (StepLn * StepLn);
-        Assert.True(curvature > 0, $"exponent {exponent}: energy not convex along ln α (curvature {curvature:E3})");
-        return -slope / curvature;
-    }
+    private static double ShiftToMinimum(BasisSet set, Element element, double exponent, Func<BasisSet, double> energy) =>
+        ExponentStationarity.ShiftToMinimum(x => energy(x == 0 ? set : Scaled(set, element, exponent, Math.Exp(x))), StepLn, $"exponent {exponent}");
 
     private static double RhfEnergy(BasisSet set, string symbol)
     {

@@ -113,8 +113,8 @@ public static class SelfConsistentField
 
             if (!double.IsFinite(energy) || !double.IsFinite(norm)) { stop = ScfStopReason.NumericalBreakdown; break; }
             quietIterations = iteration > 1 && Math.Abs(change) < options.EnergyThresholdHartree ? quietIterations + 1 : 0;
-            if (gridBased && quietIterations >= options.QuietIterationsForGridLimit && norm < options.GridLimitedCommutatorThreshold
-                && !fockBuilder.LastBuildWasIncremental)
+            if (gridBased && quietIterations >= options.QuietIterationsForGridLimit && norm >= options.CommutatorThreshold
+                && norm < options.GridLimitedCommutatorThreshold && !fockBuilder.LastBuildWasIncremental)
             { stop = ScfStopReason.ConvergedGridLimited; break; }
             if (iteration > 1 && Math.Abs(change) < options.EnergyThresholdHartree && norm < options.CommutatorThreshold)
             {

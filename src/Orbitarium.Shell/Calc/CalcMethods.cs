@@ -62,6 +62,6 @@ internal static class CalcMethods
         return result.StopReason == ScfStopReason.NumericalBreakdown
             ? $"the SCF broke down numerically after {result.Iterations} iterations{detail}; check the geometry and basis."
             : $"the SCF did not converge in {result.Iterations} iterations{detail}; no converged energy is available. " +
-              "If the energy oscillates, try --level-shift 0.2 (or ScfOptions.LevelShiftHartree at the prompt); if it is still falling, --max-iterations.";
+              "If the energy oscillates, set a level shift, e.g. --level-shift 0.5 (ScfOptions.LevelShiftHartree at the prompt; 0.2 Eh switches on by itself after 30 iterations); if it is still falling, raise --max-iterations.";
     }
 }

@@ -57,6 +57,7 @@ internal sealed class CalcReport
             ["converged"] = Outcome.Converged,
             ["stop_reason"] = scf.StopReason.ToString(),
             ["iterations"] = scf.Iterations,
+            ["automatic_level_shift_iteration"] = scf.AutomaticLevelShiftIteration,
             ["energy_unit"] = "hartree",
             ["orbital_energies"] = new JsonObject
             {
@@ -106,8 +107,10 @@ internal sealed class CalcReport
         sb.Append(C, $"  two-electron integrals: {scf.IntegralMode}");
         if (scf.DroppedLinearDependencies > 0) sb.Append(C, $"; {scf.DroppedLinearDependencies} near-linear dependencies dropped");
         sb.Append('\n');
+        if (scf.AutomaticLevelShiftIteration is int shiftedAt)
+            sb.Append(C, $"  SCF still far from converged after {shiftedAt} iterations: level shift {o.AutomaticLevelShiftHartree} Eh switched on\n");
         if (scf.StopReason == ScfStopReason.ConvergedGridLimited)
-            sb.Append(C, $"  SCF converged in {scf.Iterations} iterations (|ΔE| < {o.EnergyThresholdHartree:0e0} Eh for {o.QuietIterationsForGridLimit} iterations; max|FDS−SDF| {scf.History[^1].CommutatorNorm:0.0e0}, limited by the grid)\n");
+            sb.Append(C, $"  SCF converged in {scf.Iterations} iterations (|ΔE| < {Math.Max(o.EnergyThresholdHartree, o.GridLimitedEnergyChangeHartree):0e0} Eh for {o.QuietIterationsForGridLimit} iterations; max|FDS−SDF| {scf.History[^1].CommutatorNorm:0.0e0}, limited by the grid)\n");
         else if (scf.Converged)
             sb.Append(C, $"  SCF converged in {scf.Iterations} iterations (|ΔE| < {o.EnergyThresholdHartree:0e0} Eh, max|FDS−SDF| < {o.CommutatorThreshold:0e0})\n");
         else

@@ -21,8 +21,9 @@ public sealed record ScfOptions
     /// <summary>Convergence threshold on the largest element of FDS − SDF in the orthonormal basis, hartree. Default 1e-8.</summary>
     public double CommutatorThreshold { get; init; } = 1e-8;
 
-    /// <summary>Kohn–Sham only: an orbital gradient below this (hartree) is accepted once the energy has stayed within
-    /// <see cref="EnergyThresholdHartree"/> for <see cref="QuietIterationsForGridLimit"/> iterations in a row
+    /// <summary>Kohn–Sham only: an orbital gradient below this (hartree) is accepted once the energy has changed by less
+    /// than <see cref="GridLimitedEnergyChangeHartree"/> in each of <see cref="QuietIterationsForGridLimit"/> iterations in a row
+    /// and the gradient is no smaller than a tenth of what it was that many iterations before
     /// (<see cref="ScfStopReason.ConvergedGridLimited"/>). A finite grid breaks the symmetry of degenerate open shells
     /// slightly, leaving orbital rotations whose gradient (1e-7–1e-6 Eh for open-shell atoms at the default grid)
     /// relaxes far too slowly to converge; the energy then depends on the direction of the shell only at the grid's
@@ -30,8 +31,16 @@ public sealed record ScfOptions
     /// 0 turns the rule off.</summary>
     public double GridLimitedCommutatorThreshold { get; init; } = 1e-5;
 
+    /// <summary>Kohn–Sham only: the energy change per iteration (hartree) below which an iteration counts as quiet for
+    /// <see cref="GridLimitedCommutatorThreshold"/>. DIIS keeps turning a grid-limited open shell by tiny amounts, so
+    /// the energy wanders at the grid's resolution (1e-8–1e-7 Eh for an open-shell atom at the default grid) rather
+    /// than settling below <see cref="EnergyThresholdHartree"/>; with the gradient below 1e-5 the hard directions are
+    /// converged to ~1e-9 Eh. Default 1e-7.</summary>
+    public double GridLimitedEnergyChangeHartree { get; init; } = 1e-7;
+
     /// <summary>Kohn–Sham only: consecutive iterations with |ΔE| below <see cref="EnergyThresholdHartree"/> needed before a
-    /// grid-limited gradient is accepted (<see cref="GridLimitedCommutatorThreshold"/>). Default 8.</summary>
+    /// grid-limited gradient is accepted (<see cref="GridLimitedCommutatorThreshold"/>,
+    /// <see cref="GridLimitedEnergyChangeHartree"/>). Default 8.</summary>
     public int QuietIterationsForGridLimit { get; init; } = 8;
 
     /// <summary>Number of Fock/error pairs kept by Pulay DIIS; 0 turns DIIS off. Default 8.</summary>
@@ -44,6 +53,16 @@ public sealed record ScfOptions
     /// <summary>Level shift in hartree added to virtual orbital energies (half of it to singly occupied ROHF orbitals);
     /// stabilises difficult cases (Saunders &amp; Hillier, Int. J. Quantum Chem. 7, 699 (1973)). Default 0 (off).</summary>
     public double LevelShiftHartree { get; init; }
+
+    /// <summary>A level shift (hartree) switched on automatically when the orbital gradient is still above 1e-3 after
+    /// <see cref="AutomaticLevelShiftAfterIterations"/> iterations — the usual sign of an oscillating open shell (e.g. NO
+    /// in SVWN5). A level shift changes the path, not the solution: the converged energy is the same. Used only when
+    /// larger than <see cref="LevelShiftHartree"/>; the result records the iteration it started
+    /// (<see cref="ScfResult.AutomaticLevelShiftIteration"/>). Default 0.2; 0 turns it off.</summary>
+    public double AutomaticLevelShiftHartree { get; init; } = 0.2;
+
+    /// <summary>Iterations after which <see cref="AutomaticLevelShiftHartree"/> may switch on. Default 30.</summary>
+    public int AutomaticLevelShiftAfterIterations { get; init; } = 30;
 
     /// <summary>The starting guess. Default <see cref="ScfGuess.AtomicDensities"/>; becomes
     /// <see cref="ScfGuess.PreviousOrbitals"/> through <see cref="WithInitialOrbitals"/>.</summary>
@@ -104,6 +123,16 @@ public sealed record ScfOptions
             throw new OrbitariumInputException($"Damping is {Damping}; give a factor in [0, 1) (0 is off).");
         if (!(LevelShiftHartree >= 0) || !double.IsFinite(LevelShiftHartree))
             throw new OrbitariumInputException($"LevelShiftHartree is {LevelShiftHartree}; give a non-negative number of hartree (0 is off).");
+        if (!(GridLimitedCommutatorThreshold >= 0) || !double.IsFinite(GridLimitedCommutatorThreshold))
+            throw new OrbitariumInputException($"GridLimitedCommutatorThreshold is {GridLimitedCommutatorThreshold}; give a non-negative number (0 is off, default 1e-5).");
+        if (!(GridLimitedEnergyChangeHartree > 0) || !double.IsFinite(GridLimitedEnergyChangeHartree))
+            throw new OrbitariumInputException($"GridLimitedEnergyChangeHartree is {GridLimitedEnergyChangeHartree}; give a positive number of hartree (default 1e-7).");
+        if (QuietIterationsForGridLimit < 1)
+            throw new OrbitariumInputException($"QuietIterationsForGridLimit is {QuietIterationsForGridLimit}; give at least 1 (default 8).");
+        if (!(AutomaticLevelShiftHartree >= 0) || !double.IsFinite(AutomaticLevelShiftHartree))
+            throw new OrbitariumInputException($"AutomaticLevelShiftHartree is {AutomaticLevelShiftHartree}; give a non-negative number of hartree (0 is off).");
+        if (AutomaticLevelShiftAfterIterations < 1)
+            throw new OrbitariumInputException($"AutomaticLevelShiftAfterIterations is {AutomaticLevelShiftAfterIterations}; give at least 1 (default 30).");
         if (!(LinearDependencyThreshold > 0 && LinearDependencyThreshold < 1))
             throw new OrbitariumInputException($"LinearDependencyThreshold is {LinearDependencyThreshold}; give an overlap eigenvalue in (0, 1) (default 1e-7).");
         if (MemoryBudgetBytes < 0)

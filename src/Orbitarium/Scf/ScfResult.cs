@@ -52,13 +52,13 @@ public sealed class ScfResult
 
     /// <summary>One line on how the iterations ended, e.g. "converged in 11 iterations", "converged in 14 iterations;
     /// orbital gradient 1.2E-006 Eh is grid-limited" or "NOT CONVERGED (MaximumIterationsReached) after 128 iterations".</summary>
-    public string ConvergenceDescription => StopReason switch
+    public string ConvergenceDescription => (StopReason switch
     {
         ScfStopReason.Converged => FormattableString.Invariant($"converged in {Iterations} iterations"),
         ScfStopReason.ConvergedGridLimited => FormattableString.Invariant(
             $"converged in {Iterations} iterations; orbital gradient {History[^1].CommutatorNorm:0.0E+0} Eh is grid-limited"),
         _ => FormattableString.Invariant($"NOT CONVERGED ({StopReason}) after {Iterations} iterations"),
-    };
+    }) + (AutomaticLevelShiftIteration is int k ? FormattableString.Invariant($"; automatic level shift from iteration {k}") : "");
 
     /// <summary>Why the iterations stopped.</summary>
     public required ScfStopReason StopReason { get; init; }
@@ -173,6 +173,10 @@ public sealed class ScfResult
     /// <summary>Number of near-linearly-dependent combinations dropped from the basis.</summary>
     public required int DroppedLinearDependencies { get; init; }
 
+    /// <summary>The iteration at which <see cref="ScfOptions.AutomaticLevelShiftHartree"/> switched on, or null when it
+    /// did not.</summary>
+    public int? AutomaticLevelShiftIteration { get; init; }
+
     /// <summary>Number of molecular orbitals (basis functions minus dropped dependencies).</summary>
     public int OrbitalCount => OrbitalEnergiesAlphaHartree.Length;
 
@@ -230,7 +234,7 @@ public sealed class ScfResult
         sb.Append(c, $"  total energy       {TotalEnergyHartree,20:F10} Eh\n");
         sb.Append(c, $"  nuclear repulsion  {NuclearRepulsionHartree,20:F10} Eh\n");
         if (Converged) sb.Append(c, $"  {ConvergenceDescription} ({IntegralMode})\n");
-        else sb.Append(c, $"  NOT CONVERGED: {StopReason} after {Iterations} iterations; the energy is the last iterate's (an oscillating open shell usually converges with ScfOptions.LevelShiftHartree = 0.2)\n");
+        else sb.Append(c, $"  NOT CONVERGED: {StopReason} after {Iterations} iterations; the energy is the last iterate's (an oscillating open shell usually converges with a level shift, ScfOptions.LevelShiftHartree = 0.2–0.5)\n");
         if (Reference != ScfReference.Restricted) sb.Append(c, $"  <S^2> = {SpinSquared:F6} (pure state {ExpectedSpinSquared:F4})\n");
         if (HomoEnergyHartree is double h) sb.Append(c, $"  HOMO {h:F6} Eh");
         if (LumoEnergyHartree is double l) sb.Append(c, $"  LUMO {l:F6} Eh  gap {GapElectronVolt:F4} eV");

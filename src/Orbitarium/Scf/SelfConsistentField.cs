@@ -19,6 +19,10 @@ namespace Orbitarium.Scf;
 /// </remarks>
 public static class SelfConsistentField
 {
+    // Orbital gradient above which a run that has used AutomaticLevelShiftAfterIterations iterations counts as far from
+    // converged (a converging SCF is orders of magnitude below it by then).
+    private const double AutomaticLevelShiftGradient = 1e-3;
+
     /// <summary>Runs an SCF calculation.</summary>
     /// <param name="basis">The basis placed on the molecule; the molecule's charge and multiplicity set the electron counts.</param>
     /// <param name="reference">Restricted, unrestricted or restricted open-shell.</param>
@@ -82,6 +86,8 @@ public static class SelfConsistentField
         double enuc = molecule.NuclearRepulsionEnergyHartree;
         double previousEnergy = 0;
         int quietIterations = 0;
+        double levelShift = options.LevelShiftHartree;
+        int? automaticShiftIteration = null;
         bool gridBased = options.ExchangeCorrelation is not null && options.GridLimitedCommutatorThreshold > 0;
         Matrix<double>? previousAlpha = null, previousBeta = null;
         ScfStopReason stop;
@@ -99,7 +105,7 @@ public static class SelfConsistentField
             }
             fock = fockBuilder.Build(state.DensityAlpha, state.DensityBeta, cancellationToken);
             double energy = enuc + fock.OneElectronEnergy + fock.TwoElectronEnergy + fock.ExchangeCorrelationEnergy;
-            model.LevelShiftHartree = options.LevelShiftHartree;
+            model.LevelShiftHartree = levelShift;
             var focks = model.ConvergenceFocks(fock.Alpha, fock.Beta, state);
             var errors = model.Errors(focks, state);
             double norm = 0;
@@ -112,9 +118,14 @@ public static class SelfConsistentField
             previousEnergy = energy;
 
             if (!double.IsFinite(energy) || !double.IsFinite(norm)) { stop = ScfStopReason.NumericalBreakdown; break; }
-            quietIterations = iteration > 1 && Math.Abs(change) < options.EnergyThresholdHartree ? quietIterations + 1 : 0;
+            double quietChange = Math.Max(options.EnergyThresholdHartree, options.GridLimitedEnergyChangeHartree);
+            quietIterations = iteration > 1 && Math.Abs(change) < quietChange ? quietIterations + 1 : 0;
+            // Grid-limited: quiet energy, small gradient, and a gradient that has stopped falling (a converging run cuts it
+            // by orders of magnitude over the same iterations).
             if (gridBased && quietIterations >= options.QuietIterationsForGridLimit && norm >= options.CommutatorThreshold
-                && norm < options.GridLimitedCommutatorThreshold && !fockBuilder.LastBuildWasIncremental)
+                && norm < options.GridLimitedCommutatorThreshold
+                && norm >= 0.1 * history[iteration - 1 - options.QuietIterationsForGridLimit].CommutatorNorm
+                && !fockBuilder.LastBuildWasIncremental)
             { stop = ScfStopReason.ConvergedGridLimited; break; }
             if (iteration > 1 && Math.Abs(change) < options.EnergyThresholdHartree && norm < options.CommutatorThreshold)
             {
@@ -125,9 +136,18 @@ public static class SelfConsistentField
             }
             if (iteration >= options.MaxIterations) { stop = ScfStopReason.MaximumIterationsReached; break; }
 
+            if (automaticShiftIteration is null && options.AutomaticLevelShiftHartree > levelShift
+                && iteration >= options.AutomaticLevelShiftAfterIterations && norm > AutomaticLevelShiftGradient)
+            {
+                // Still far from converged: most often an oscillating open shell. Shift the virtual levels and restart DIIS.
+                automaticShiftIteration = iteration;
+                levelShift = options.AutomaticLevelShiftHartree;
+                model.LevelShiftHartree = levelShift;
+                diis?.Clear();
+            }
             previousAlpha = state.DensityAlpha;
             previousBeta = state.DensityBeta;
-            var next = diis is not null ? diis.Extrapolate() : focks;
+            var next = diis is { Count: > 0 } ? diis.Extrapolate() : focks;
             model.Solve(next, state);
         }
 
@@ -178,6 +198,7 @@ public static class SelfConsistentField
             IntegralMode = incremental ? integrals.Kernel.Mode + ", incremental Fock builds" : integrals.Kernel.Mode,
             OrthogonalizationUsed = orth.KindUsed,
             DroppedLinearDependencies = orth.DroppedCount,
+            AutomaticLevelShiftIteration = automaticShiftIteration,
             IntegralSeconds = integrals.Seconds,
             GuessSeconds = guessSeconds,
             IterationSeconds = iterationSeconds,

@@ -8,8 +8,9 @@ using SkiaSharp;
 namespace Orbitarium.Plots;
 
 /// <summary>
-/// A strip of maps side by side with one shared colour scale — typically the same quantity at several bond lengths,
-/// so the build-up or depletion of bond density is seen at a glance.
+/// A strip of maps side by side with one shared colour scale and one shared length scale (the same axis limits and
+/// data-area size in every panel, equal units on both axes) — typically the same quantity at several bond lengths,
+/// so the build-up or depletion of bond density, and the nuclei moving apart, are seen at a glance.
 /// </summary>
 public static partial class PanelStrip
 {
@@ -35,14 +36,26 @@ public static partial class PanelStrip
         int w = options.WidthPixels;
         var plane0 = fields[0].Grid as PlaneGrid ?? throw new OrbitariumInputException("A panel strip needs fields on plane grids.");
         int h = options.HeightPixels ?? FieldMap.FittingHeight(plane0, w, 110);
-        PlotSaver.CheckSize(w * fields.Count, h);
+        int totalWidth = w * fields.Count + ColourBarPixels;
+        PlotSaver.CheckSize(totalWidth, h);
+        if (w <= PaddingLeft + PaddingRight + 20 || h <= PaddingBottom + PaddingTop + 20)
+            throw new OrbitariumInputException($"Panels of {w} × {h} pixels leave no room for the maps; use at least {PaddingLeft + PaddingRight + 100} × {PaddingBottom + PaddingTop + 100}.");
         var plots = new List<Plot>();
+        double left = double.MaxValue, right = double.MinValue, bottom = double.MaxValue, top = double.MinValue;
         for (int i = 0; i < fields.Count; i++)
         {
             var plot = new Plot();
-            FieldMap.Draw(plot, fields[i], options with { Title = titles[i] }, limit, colorBar: i == fields.Count - 1);
+            bool last = i == fields.Count - 1;
+            FieldMap.Draw(plot, fields[i], options with { Title = titles[i] }, limit, colorBar: last);
+            // Same data-area size in every panel (the last one is wider by its colour bar) ...
+            plot.Layout.Fixed(new PixelPadding(PaddingLeft, PaddingRight + (last ? ColourBarPixels : 0), PaddingBottom, PaddingTop));
+            var limits = plot.Axes.GetLimits();
+            left = Math.Min(left, limits.Left); right = Math.Max(right, limits.Right);
+            bottom = Math.Min(bottom, limits.Bottom); top = Math.Max(top, limits.Top);
             plots.Add(plot);
         }
+        // ... and the same limits, so one ångström is the same length in every panel.
+        foreach (var plot in plots) plot.Axes.SetLimits(left, right, bottom, top);
         string full = format == PlotFormat.Png ? SavePng(plots, path, w, h) : SaveSvg(plots, path, w, h);
         var preview = new StringBuilder();
         for (int i = 0; i < fields.Count; i++)
@@ -53,19 +66,24 @@ public static partial class PanelStrip
         return new PlotFile(full, $"panel strip of {fields[0].Quantity}: {string.Join(", ", titles)}")
         {
             TerminalPreview = preview.ToString().TrimEnd('\n'),
-            WidthPixels = w * fields.Count,
+            WidthPixels = totalWidth,
             HeightPixels = h,
         };
     }
 
+    // Fixed margins around every panel's data area (pixels); the last panel is wider by the colour bar.
+    private const int PaddingLeft = 80, PaddingRight = 20, PaddingBottom = 55, PaddingTop = 40, ColourBarPixels = 120;
+
+    private static int PanelWidth(int i, int count, int w) => i == count - 1 ? w + ColourBarPixels : w;
+
     private static string SavePng(List<Plot> plots, string path, int w, int h)
     {
-        using var surface = SKSurface.Create(new SKImageInfo(w * plots.Count, h));
+        using var surface = SKSurface.Create(new SKImageInfo(w * plots.Count + ColourBarPixels, h));
         var canvas = surface.Canvas;
         canvas.Clear(SKColors.White);
         for (int i = 0; i < plots.Count; i++)
         {
-            using var panel = SKBitmap.Decode(plots[i].GetImageBytes(w, h, ImageFormat.Png));
+            using var panel = SKBitmap.Decode(plots[i].GetImageBytes(PanelWidth(i, plots.Count, w), h, ImageFormat.Png));
             canvas.DrawBitmap(panel, i * w, 0);
         }
         using var image = surface.Snapshot();
@@ -77,10 +95,11 @@ public static partial class PanelStrip
     {
         var inv = CultureInfo.InvariantCulture;
         var sb = new StringBuilder();
-        sb.Append(inv, $"<svg xmlns=\"http://www.w3.org/2000/svg\" width=\"{w * plots.Count}\" height=\"{h}\" viewBox=\"0 0 {w * plots.Count} {h}\">\n");
+        int total = w * plots.Count + ColourBarPixels;
+        sb.Append(inv, $"<svg xmlns=\"http://www.w3.org/2000/svg\" width=\"{total}\" height=\"{h}\" viewBox=\"0 0 {total} {h}\">\n");
         for (int i = 0; i < plots.Count; i++)
         {
-            string svg = XmlDeclaration().Replace(plots[i].GetSvgXml(w, h), "");
+            string svg = XmlDeclaration().Replace(plots[i].GetSvgXml(PanelWidth(i, plots.Count, w), h), "");
             // Nest each panel's own <svg> element, shifted to its column.
             svg = OpeningSvg().Replace(svg, m => m.Value.Replace("<svg", string.Create(inv, $"<svg x=\"{i * w}\" y=\"0\"")), 1);
             sb.Append(svg).Append('\n');

@@ -43,7 +43,8 @@ public class OtherPlotTests
         }).ToList();
         var png = PanelStrip.Save(fields, [.. r.Select(x => $"R = {x} bohr")], dir.File("strip.png"));
         AssertPng(png.Path);
-        Assert.Equal(3 * 450, png.WidthPixels);
+        Assert.Equal(3 * 450 + 120, png.WidthPixels);   // three panels and the last one's colour bar
+        using (var image = SkiaSharp.SKBitmap.Decode(png.Path)) Assert.Equal(png.WidthPixels, image.Width);
         var svg = PanelStrip.Save(fields, [.. r.Select(x => $"R = {x} bohr")], dir.File("strip.svg"));
         var doc = System.Xml.Linq.XDocument.Load(svg.Path);
         Assert.Equal("svg", doc.Root!.Name.LocalName);

@@ -28,6 +28,29 @@ public class VtkImageDataTests
     }
 
     [Fact]
+    public void Binary_arrays_hold_the_values_exactly_in_less_space()
+    {
+        // VTK XML "binary" data arrays (Kitware, "VTK File Formats"): base64 of a header (UInt64 byte count, as declared
+        // by header_type) followed by the raw little-endian numbers.
+        using var dir = new PlotTestFolder();
+        var r = AnalysisSystems.DihydrogenRhfSto3g;
+        var box = BoxGrid.AroundMolecule(r.Molecule, 1.0, 0.25);
+        var rho = ScfFields.Density(r, box);
+        var binary = VtkImageData.Write(dir.File("h2-binary.vti"), VtkEncoding.Binary, rho);
+        var ascii = VtkImageData.Write(dir.File("h2-ascii.vti"), rho);
+        var doc = XDocument.Load(binary);
+        Assert.Equal("UInt64", doc.Root!.Attribute("header_type")!.Value);
+        var array = doc.Descendants("DataArray").Single(a => a.Attribute("Name")!.Value == "electron_density");
+        Assert.Equal("binary", array.Attribute("format")!.Value);
+        byte[] bytes = Convert.FromBase64String(array.Value.Trim());
+        var expected = rho.ToArray();
+        Assert.Equal((ulong)(8 * expected.Length), BitConverter.ToUInt64(bytes, 0));
+        for (int i = 0; i < expected.Length; i++) Assert.Equal(expected[i], BitConverter.ToDouble(bytes, 8 + 8 * i));
+        // Base64 takes 32/3 characters per double against about 17 for "G10" text and a separator.
+        Assert.True(new FileInfo(binary).Length < 0.75 * new FileInfo(ascii).Length);
+    }
+
+    [Fact]
     public void A_field_on_a_plane_is_refused()
     {
         var m = AnalysisSystems.Dihydrogen(0.74);

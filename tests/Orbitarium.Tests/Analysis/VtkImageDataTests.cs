@@ -50,6 +50,55 @@ public class VtkImageDataTests
         Assert.True(new FileInfo(binary).Length < 0.75 * new FileInfo(ascii).Length);
     }
 
+    [SkippableFact]
+    public void The_reference_VTK_reader_reads_both_encodings_back()
+    {
+        // The VTK library itself (Debian python3-vtk9, vtkXMLImageDataReader) is the reference reader of the format.
+        // Binary arrays come back bit for bit; ASCII ones to the 10 significant digits written.
+        const string python = "/usr/bin/python3";
+        Skip.IfNot(File.Exists(python) && RunPython(python, "import vtk") is { ExitCode: 0 },
+            "the VTK Python module is not installed (apt-get install python3-vtk9)");
+        using var dir = new PlotTestFolder();
+        var r = AnalysisSystems.DihydrogenRhfSto3g;
+        var box = BoxGrid.AroundMolecule(r.Molecule, 1.0, 0.25);
+        var rho = ScfFields.Density(r, box);
+        var expected = rho.ToArray();
+        foreach (var (encoding, tolerance) in new[] { (VtkEncoding.Binary, 0.0), (VtkEncoding.Ascii, 1e-9) })
+        {
+            string path = VtkImageData.Write(dir.File($"h2-{encoding}.vti"), encoding, rho);
+            string script = "import vtk\nr = vtk.vtkXMLImageDataReader()\nr.SetFileName(" + Quote(path) + ")\nr.Update()\n" +
+                            "img = r.GetOutput()\na = img.GetPointData().GetArray('electron_density')\n" +
+                            "print(*img.GetDimensions())\nprint(*img.GetSpacing())\n" +
+                            "print('\\n'.join(repr(a.GetValue(i)) for i in range(a.GetNumberOfTuples())))\n";
+            var (code, text) = RunPython(python, script);
+            Assert.True(code == 0, text);
+            var lines = text.Split('\n', StringSplitOptions.RemoveEmptyEntries);
+            Assert.Equal($"{box.CountX} {box.CountY} {box.CountZ}", lines[0]);
+            Assert.Equal(box.SpacingBohr, double.Parse(lines[1].Split(' ')[0], System.Globalization.CultureInfo.InvariantCulture), 1e-14);
+            Assert.Equal(expected.Length, lines.Length - 2);
+            for (int i = 0; i < expected.Length; i++)
+            {
+                double read = double.Parse(lines[i + 2], System.Globalization.CultureInfo.InvariantCulture);
+                Assert.True(Math.Abs(read - expected[i]) <= tolerance * Math.Abs(expected[i]), $"{encoding} value {i}: wrote {expected[i]:R}, read {read:R}");
+            }
+        }
+    }
+
+    private static string Quote(string s) => "'" + s.Replace("\\", "\\\\").Replace("'", "\\'") + "'";
+
+    private static (int ExitCode, string Output) RunPython(string python, string script)
+    {
+        var start = new System.Diagnostics.ProcessStartInfo(python) { RedirectStandardInput = true, RedirectStandardOutput = true, RedirectStandardError = true };
+        start.ArgumentList.Add("-");
+        using var process = System.Diagnostics.Process.Start(start)!;
+        process.StandardInput.Write(script);
+        process.StandardInput.Close();
+        var stdout = process.StandardOutput.ReadToEndAsync();
+        string stderr = process.StandardError.ReadToEnd();
+        process.WaitForExit(60_000);
+        return (process.ExitCode, stdout.Result + stderr);
+    }
+
     [Fact]
     public void A_field_on_a_plane_is_refused()
     {

@@ -29,6 +29,15 @@ public sealed class KohnShamResult
     /// <summary>The molecule (same as <c>Scf.Molecule</c>).</summary>
     public Molecule Molecule => Scf.Molecule;
 
+    /// <summary>Lets a Kohn–Sham result go wherever an <see cref="ScfResult"/> is taken (fields, populations, bond
+    /// orders, plots, correlation): it converts to its <see cref="Scf"/> part.</summary>
+    /// <param name="result">The Kohn–Sham result.</param>
+    public static implicit operator ScfResult(KohnShamResult result)
+    {
+        ArgumentNullException.ThrowIfNull(result);
+        return result.Scf;
+    }
+
     /// <summary>The functional.</summary>
     public ExchangeCorrelationFunctional Functional { get; }
 

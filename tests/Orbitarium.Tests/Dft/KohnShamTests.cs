@@ -1,3 +1,4 @@
+using Orbitarium.Analysis;
 using Orbitarium.BasisSets;
 using Orbitarium.Chemistry;
 using Orbitarium.Dft;
@@ -100,5 +101,17 @@ public class KohnShamTests(ITestOutputHelper output)
         var lithium = Molecule.FromXyz("1\nLi\nLi 0 0 0\n");
         var e = Assert.Throws<OrbitariumInputException>(() => lithium.WithBasis("6-31G").RunRks("pbe"));
         Assert.Contains("RunUks", e.Message);
+    }
+
+    [Fact]
+    public void A_Kohn_Sham_result_goes_wherever_an_SCF_result_is_taken()
+    {
+        // The implicit conversion hands over the SCF part: analysis on the KS result equals analysis on .Scf
+        // (the same object), e.g. the dipole (Szabo & Ostlund eq. 3.193 evaluated on the KS density).
+        var ks = Molecule.FromXyz("3\nwater\nO 0 0 0.1173\nH 0 0.7572 -0.4692\nH 0 -0.7572 -0.4692\n").WithBasis("6-31G").RunRks("svwn5", GridLevel.Coarse);
+        ScfResult scf = ks;
+        Assert.Same(ks.Scf, scf);
+        Assert.Equal(MultipoleMoments.Compute(ks.Scf).DipoleDebye.Length, MultipoleMoments.Compute(ks).DipoleDebye.Length, 12);
+        Assert.Same(ks.Molecule, ks.Scf.Molecule);
     }
 }

@@ -86,6 +86,7 @@ public static class SelfConsistentField
         double enuc = molecule.NuclearRepulsionEnergyHartree;
         double previousEnergy = 0;
         int quietIterations = 0;
+        double quietChange = Math.Max(options.EnergyThresholdHartree, options.GridLimitedEnergyChangeHartree);
         double levelShift = options.LevelShiftHartree;
         int? automaticShiftIteration = null;
         bool gridBased = options.ExchangeCorrelation is not null && options.GridLimitedCommutatorThreshold > 0;
@@ -118,7 +119,6 @@ public static class SelfConsistentField
             previousEnergy = energy;
 
             if (!double.IsFinite(energy) || !double.IsFinite(norm)) { stop = ScfStopReason.NumericalBreakdown; break; }
-            double quietChange = Math.Max(options.EnergyThresholdHartree, options.GridLimitedEnergyChangeHartree);
             quietIterations = iteration > 1 && Math.Abs(change) < quietChange ? quietIterations + 1 : 0;
             // Grid-limited: quiet energy, small gradient, and a gradient that has stopped falling (a converging run cuts it
             // by orders of magnitude over the same iterations).

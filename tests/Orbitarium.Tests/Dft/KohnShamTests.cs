@@ -106,12 +106,12 @@ public class KohnShamTests(ITestOutputHelper output)
     [Fact]
     public void A_Kohn_Sham_result_goes_wherever_an_SCF_result_is_taken()
     {
-        // The implicit conversion hands over the SCF part: analysis on the KS result equals analysis on .Scf
-        // (the same object), e.g. the dipole (Szabo & Ostlund eq. 3.193 evaluated on the KS density).
+        // The implicit conversion hands over the SCF part itself, so any analysis taking an ScfResult sees the KS
+        // density (here the dipole, which must be that of a bent water molecule: nonzero).
         var ks = Molecule.FromXyz("3\nwater\nO 0 0 0.1173\nH 0 0.7572 -0.4692\nH 0 -0.7572 -0.4692\n").WithBasis("6-31G").RunRks("svwn5", GridLevel.Coarse);
         ScfResult scf = ks;
         Assert.Same(ks.Scf, scf);
-        Assert.Equal(MultipoleMoments.Compute(ks.Scf).DipoleDebye.Length, MultipoleMoments.Compute(ks).DipoleDebye.Length, 12);
+        Assert.True(MultipoleMoments.Compute(ks).DipoleMagnitudeDebye > 1);
         Assert.Same(ks.Molecule, ks.Scf.Molecule);
     }
 }

@@ -34,10 +34,10 @@ internal sealed class CcsdAmplitudeSolver
     }
 
     /// <summary>Singles amplitudes t_i^a at [i·v + a].</summary>
-    public double[] T1 { get; private set; }
+    public double[] T1 { get; internal set; }
 
     /// <summary>Doubles amplitudes t_ij^ab at [((i·o + j)·v + a)·v + b].</summary>
-    public double[] T2 { get; private set; }
+    public double[] T2 { get; internal set; }
 
     public sealed record Outcome(double Energy, double Mp2Energy, int Iterations, bool Converged, string StopReason,
         List<double> EnergyHistory, List<double> ResidualHistory, double T1Diagnostic);
@@ -150,7 +150,7 @@ internal sealed class CcsdAmplitudeSolver
         return e;
     }
 
-    private (double[] T1, double[] T2) Iterate(double[] d1, CancellationToken ct)
+    internal (double[] T1, double[] T2) Iterate(double[] d1, CancellationToken ct)
     {
         int o = _o, v = _v, n = _n;
         var t1 = T1;

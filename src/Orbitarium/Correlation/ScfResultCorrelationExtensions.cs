@@ -101,7 +101,7 @@ public static class ScfResultCorrelationExtensions
         CancellationToken cancellationToken = default)
     {
         RequireRhfOrUhf(scf, "CCSD");
-        return Correlation.Ccsd.Compute(Hamiltonian(scf, options, "CCSD", cancellationToken), options, progress, cancellationToken);
+        return Correlation.Ccsd.ComputeOnPrivateHamiltonian(Hamiltonian(scf, options, "CCSD", cancellationToken), false, options, progress, cancellationToken);
     }
 
     /// <summary>CCSD followed by the perturbative triples (T) on an RHF or UHF result.</summary>
@@ -113,7 +113,7 @@ public static class ScfResultCorrelationExtensions
         CancellationToken cancellationToken = default)
     {
         RequireRhfOrUhf(scf, "CCSD(T)");
-        return Correlation.Ccsd.ComputeWithTriples(Hamiltonian(scf, options, "CCSD(T)", cancellationToken), options, progress, cancellationToken);
+        return Correlation.Ccsd.ComputeOnPrivateHamiltonian(Hamiltonian(scf, options, "CCSD(T)", cancellationToken), true, options, progress, cancellationToken);
     }
 
     /// <summary>CIS excited states: singlets of an RHF result (<paramref name="triplets"/> false) or triplets, or the
@@ -188,7 +188,11 @@ public static class ScfResultCorrelationExtensions
         else if (method.StartsWith("CCSD", StringComparison.Ordinal))
         {
             int nf = options.FrozenCoreOrbitals;
-            MemoryEstimate.Require(method, Correlation.Ccsd.EstimateDoubles(2 * (scf.OrbitalCount - nf), scf.AlphaElectronCount + scf.BetaElectronCount - 2 * nf, options.DiisVectors),
+            bool closedShell = scf.Reference == ScfReference.Restricted && scf.AlphaElectronCount == scf.BetaElectronCount;
+            // The MO Hamiltonian (m⁴) is held alongside the solver's own arrays.
+            double hamiltonian = Math.Pow(scf.OrbitalCount, 4) * (scf.Reference == ScfReference.Restricted ? 1 : 3);
+            MemoryEstimate.Require(method, hamiltonian + Correlation.Ccsd.EstimateDoubles(closedShell, scf.OrbitalCount, nf,
+                    scf.AlphaElectronCount, scf.BetaElectronCount, options.DiisVectors, copiesIntegrals: false),
                 options, "use a smaller basis, freeze core orbitals (WithFrozenCore), or raise the budget (WithMemoryBudgetMebibytes).");
         }
         return scf.ToMolecularOrbitalHamiltonian(options, ct);

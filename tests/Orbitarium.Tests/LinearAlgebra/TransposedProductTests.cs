@@ -1,0 +1,68 @@
+using Orbitarium.LinearAlgebra;
+
+namespace Orbitarium.Tests.LinearAlgebra;
+
+public class TransposedProductTests
+{
+    [Theory]
+    [InlineData(1, 1, 1)]
+    [InlineData(3, 5, 7)]
+    [InlineData(37, 22, 300)]      // remainders in rows, columns and the K panel
+    [InlineData(40, 41, 1025)]     // several K panels, parallel row blocks
+    public void Equals_the_textbook_triple_loop(int m, int n, int k)
+    {
+        // C = α A Bᵀ + C, against the definition summed in order (round-off only: relative 1e-13).
+        var rng = new Random(m * 1000 + n * 10 + k);
+        const int aOffset = 3, bOffset = 5;
+        var a = new double[aOffset + m * k];
+        var b = new double[bOffset + n * k];
+        var c = new double[m * n];
+        for (int x = 0; x < a.Length; x++) a[x] = rng.NextDouble() - 0.5;
+        for (int x = 0; x < b.Length; x++) b[x] = rng.NextDouble() - 0.5;
+        for (int x = 0; x < c.Length; x++) c[x] = rng.NextDouble();
+        var expected = (double[])c.Clone();
+        for (int i = 0; i < m; i++)
+            for (int j = 0; j < n; j++)
+            {
+                double s = 0;
+                for (int p = 0; p < k; p++) s += a[aOffset + i * k + p] * b[bOffset + j * k + p];
+                expected[i * n + j] += -0.5 * s;
+            }
+
+        TransposedProduct.Multiply(a, b, c, m, n, k, alpha: -0.5, accumulate: true, aOffset: aOffset, bOffset: bOffset);
+
+        for (int x = 0; x < c.Length; x++) Assert.Equal(expected[x], c[x], 1e-13 * Math.Max(1, k));
+    }
+
+    [Fact]
+    public void Overwrites_unless_asked_to_accumulate()
+    {
+        var a = new double[] { 1, 2 };
+        var b = new double[] { 3, 4 };
+        var c = new double[] { 100 };
+        TransposedProduct.Multiply(a, b, c, 1, 1, 2);
+        Assert.Equal(11, c[0]);
+    }
+
+    [Fact]
+    public void Gives_the_same_bits_on_every_run()
+    {
+        // Each element is summed by one thread in a fixed order (what the class promises).
+        var rng = new Random(5);
+        var a = new double[64 * 700];
+        var b = new double[48 * 700];
+        for (int x = 0; x < a.Length; x++) a[x] = rng.NextDouble();
+        for (int x = 0; x < b.Length; x++) b[x] = rng.NextDouble();
+        var first = new double[64 * 48];
+        var second = new double[64 * 48];
+        TransposedProduct.Multiply(a, b, first, 64, 48, 700);
+        TransposedProduct.Multiply(a, b, second, 64, 48, 700);
+        Assert.Equal(first, second);
+    }
+
+    [Fact]
+    public void Refuses_arrays_too_short_for_the_shape()
+    {
+        Assert.Throws<ArgumentException>(() => TransposedProduct.Multiply(new double[5], new double[6], new double[4], 2, 2, 3));
+    }
+}

@@ -20,13 +20,17 @@ internal sealed class AmplitudeDiis
     public void Extrapolate(double[] vector, double[] error)
     {
         if (_capacity < 2) return;
+        double[]? oldVector = null, oldError = null;
         if (_vectors.Count == _capacity)
         {
+            oldVector = _vectors[0];
+            oldError = _errors[0];
             _vectors.RemoveAt(0);
             _errors.RemoveAt(0);
         }
-        _vectors.Add((double[])vector.Clone());
-        _errors.Add((double[])error.Clone());
+        // The oldest pair's arrays are reused once the subspace is full, so a long run allocates nothing here.
+        _vectors.Add(CopyInto(oldVector, vector));
+        _errors.Add(CopyInto(oldError, error));
         int k = _vectors.Count;
         if (k < 2) return;
         var b = Matrix<double>.Build.Dense(k + 1, k + 1);
@@ -66,6 +70,13 @@ internal sealed class AmplitudeDiis
             var v = _vectors[i];
             for (int p = 0; p < vector.Length; p++) vector[p] += ci * v[p];
         }
+    }
+
+    private static double[] CopyInto(double[]? target, double[] source)
+    {
+        if (target is null || target.Length != source.Length) return (double[])source.Clone();
+        Array.Copy(source, target, source.Length);
+        return target;
     }
 
     private static double Dot(double[] a, double[] b)

@@ -30,6 +30,23 @@ internal sealed class ClosedShellCcsdSolver
     private readonly double[] _combinedOvov;         // [(k,c)][(l,d)] = 2(ld|kc) − (lc|kd)
     private readonly double[] _ovovByVirtual;        // [c][(k,l,d)] = (ld|kc)
     private readonly double[] _ovovByOccupied;       // [k][(l,c,d)] = (kd|lc)
+    private readonly (double[] T1, double[] T2) _amplitudesA, _amplitudesB;
+    private readonly double[]?[] _work = new double[]?[Enum.GetValues<Slot>().Length];
+
+    /// <summary>Scratch arrays of the iterations, allocated on first use and reused: an iteration allocates no
+    /// array of the size of T2.</summary>
+    private enum Slot
+    {
+        U, Singles, Doubles, Pairs, HoleLadder, HoleLadderTransposed, T2ByVirtualPair, Symmetrised, TCrossed, TDirect,
+        UDirect, RingDirect, RingExchange, Ring, RingCrossed, UByVirtual, UByOccupied, DiisVector, DiisError,
+    }
+
+    private double[] Work(Slot slot, int length)
+    {
+        var a = _work[(int)slot];
+        if (a is null || a.Length != length) _work[(int)slot] = a = new double[length];
+        return a;
+    }
 
     /// <summary>Sets up the solver on the active orbitals of <paramref name="hamiltonian"/> (the first
     /// <paramref name="frozenCore"/> orbitals are frozen).</summary>
@@ -62,8 +79,10 @@ internal sealed class ClosedShellCcsdSolver
                 _frozenCoreOperator[p * m + q] = f - active;
             }
         _dressedWith = new double[o * v];
-        T1 = new double[o * v];
-        T2 = new double[o * o * v * v];
+        _amplitudesA = (new double[o * v], new double[o * o * v * v]);
+        _amplitudesB = (new double[o * v], new double[o * o * v * v]);
+        T1 = _amplitudesA.T1;
+        T2 = _amplitudesA.T2;
 
         _ovovByOccupiedPair = new double[o * o * v * v];
         _coulombOvov = new double[o * v * o * v];
@@ -154,8 +173,8 @@ internal sealed class ClosedShellCcsdSolver
                 Dress(T1);
                 var (r1, r2) = Residual(ct);
                 int n1 = r1.Length;
-                var vec = new double[n1 + r2.Length];
-                var err = new double[vec.Length];
+                var vec = Work(Slot.DiisVector, n1 + r2.Length);
+                var err = Work(Slot.DiisError, vec.Length);
                 double sumSq = 0;
                 for (int i = 0; i < o; i++)
                     for (int a = 0; a < v; a++)
@@ -182,8 +201,9 @@ internal sealed class ClosedShellCcsdSolver
                         }
                 double rms = Math.Sqrt(sumSq / vec.Length);
                 diis.Extrapolate(vec, err);
-                var t1 = new double[n1];
-                var t2 = new double[r2.Length];
+                // Two amplitude buffers take turns, so nothing of the size of T2 is allocated per iteration.
+                var t1 = T1 == _amplitudesA.T1 ? _amplitudesB.T1 : _amplitudesA.T1;
+                var t2 = T2 == _amplitudesA.T2 ? _amplitudesB.T2 : _amplitudesA.T2;
                 Array.Copy(vec, 0, t1, 0, n1);
                 Array.Copy(vec, n1, t2, 0, t2.Length);
                 T1 = t1;
@@ -348,14 +368,14 @@ internal sealed class ClosedShellCcsdSolver
         var t2 = T2;
         var f = DressedFock();
         // u_ij^ab = 2 t_ij^ab − t_ij^ba
-        var u = new double[t2.Length];
+        var u = Work(Slot.U, t2.Length);
         for (int ij = 0; ij < oo; ij++)
             for (int a = 0; a < v; a++)
                 for (int b = 0; b < v; b++)
                     u[(ij * v + a) * v + b] = 2 * t2[(ij * v + a) * v + b] - t2[(ij * v + b) * v + a];
 
         // Singles.
-        var r1 = new double[ov];
+        var r1 = Work(Slot.Singles, ov);
         Parallel.For(0, o, i =>
         {
             for (int a = 0; a < v; a++)
@@ -380,11 +400,12 @@ internal sealed class ClosedShellCcsdSolver
         });
         ct.ThrowIfCancellationRequested();
 
-        var r2 = new double[t2.Length];
+        var r2 = Work(Slot.Doubles, t2.Length);
+        Array.Clear(r2);
         // A2 first part and the particle–particle ladder Σ_cd t_ij^cd (ac|bd), over pairs i ≤ j.
         int pairCount = o * (o + 1) / 2;
         var pairs = new (int I, int J)[pairCount];
-        var tPairs = new double[pairCount * vv];
+        var tPairs = Work(Slot.Pairs, pairCount * vv);
         for (int i = 0, p = 0; i < o; i++)
             for (int j = i; j < o; j++, p++)
             {
@@ -418,15 +439,15 @@ internal sealed class ClosedShellCcsdSolver
                         r2[((i * o + j) * v + a) * v + b] += G(o + a, i, o + b, j);
 
         // B2: Σ_kl t_kl^ab W_klij, W_klij = (ki|lj) + Σ_cd t_ij^cd (kc|ld).
-        var w = new double[oo * oo];
+        var w = Work(Slot.HoleLadder, oo * oo);
         TransposedProduct.Multiply(_ovovByOccupiedPair, t2, w, oo, oo, vv);
-        var wT = new double[oo * oo];   // [ij][kl]
+        var wT = Work(Slot.HoleLadderTransposed, oo * oo);   // [ij][kl]
         for (int k = 0; k < o; k++)
             for (int l = 0; l < o; l++)
                 for (int i = 0; i < o; i++)
                     for (int j = 0; j < o; j++)
                         wT[(i * o + j) * oo + k * o + l] = w[(k * o + l) * oo + i * o + j] + G(k, i, l, j);
-        var t2ByVirtualPair = new double[vv * oo];  // [ab][kl]
+        var t2ByVirtualPair = Work(Slot.T2ByVirtualPair, vv * oo);  // [ab][kl]
         for (int kl = 0; kl < oo; kl++)
             for (int ab = 0; ab < vv; ab++)
                 t2ByVirtualPair[ab * oo + kl] = t2[kl * vv + ab];
@@ -437,10 +458,10 @@ internal sealed class ClosedShellCcsdSolver
         // Ring: x_ij^ab = Σ_me u_im^ae W_mbej + Σ_me t_im^ae W_mbje + Σ_me t_mj^ae W_mbie with
         //   W_mbej = (me|bj) + ½ Σ_nf t_nj^fb L_menf − ½ Σ_nf t_nj^bf (me|nf),  L_menf = 2(me|nf) − (mf|ne),
         //   W_mbje = −(mj|be) + ½ Σ_nf t_nj^bf (mf|ne).
-        var x = new double[t2.Length];
-        var tByOv = new double[ov * ov];     // [(i,a)][(m,e)] = t_mi^ae
-        var tDirect = new double[ov * ov];   // [(i,a)][(m,e)] = t_im^ae
-        var uByOv = new double[ov * ov];     // [(i,a)][(m,e)] = u_im^ae
+        var x = Work(Slot.Symmetrised, t2.Length);
+        var tByOv = Work(Slot.TCrossed, ov * ov);     // [(i,a)][(m,e)] = t_mi^ae
+        var tDirect = Work(Slot.TDirect, ov * ov);   // [(i,a)][(m,e)] = t_im^ae
+        var uByOv = Work(Slot.UDirect, ov * ov);     // [(i,a)][(m,e)] = u_im^ae
         for (int i = 0; i < o; i++)
             for (int a = 0; a < v; a++)
                 for (int l = 0; l < o; l++)
@@ -451,8 +472,8 @@ internal sealed class ClosedShellCcsdSolver
                         tDirect[at] = t2[((i * o + l) * v + a) * v + d];
                         uByOv[at] = u[((i * o + l) * v + a) * v + d];
                     }
-        var wBej = new double[ov * ov];      // [(j,b)][(m,e)] = W_mbej
-        var wBje = new double[ov * ov];      // [(j,b)][(m,e)] = W_mbje
+        var wBej = Work(Slot.RingDirect, ov * ov);      // [(j,b)][(m,e)] = W_mbej
+        var wBje = Work(Slot.RingExchange, ov * ov);      // [(j,b)][(m,e)] = W_mbje
         TransposedProduct.Multiply(tDirect, _combinedOvov, wBej, ov, ov, ov, alpha: 0.5);
         TransposedProduct.Multiply(tByOv, _coulombOvov, wBej, ov, ov, ov, alpha: -0.5, accumulate: true);
         TransposedProduct.Multiply(tByOv, _exchangeOvov, wBje, ov, ov, ov, alpha: 0.5);
@@ -465,10 +486,10 @@ internal sealed class ClosedShellCcsdSolver
                         wBej[at] += G(mm, o + e, o + b, j);
                         wBje[at] -= G(mm, j, o + b, o + e);
                     }
-        var ring = new double[ov * ov];      // [(i,a)][(j,b)]
+        var ring = Work(Slot.Ring, ov * ov);      // [(i,a)][(j,b)]
         TransposedProduct.Multiply(uByOv, wBej, ring, ov, ov, ov);
         TransposedProduct.Multiply(tDirect, wBje, ring, ov, ov, ov, accumulate: true);
-        var ringCrossed = new double[ov * ov];  // [(j,a)][(i,b)] = Σ_me t_mj^ae W_mbie
+        var ringCrossed = Work(Slot.RingCrossed, ov * ov);  // [(j,a)][(i,b)] = Σ_me t_mj^ae W_mbie
         TransposedProduct.Multiply(tByOv, wBje, ringCrossed, ov, ov, ov);
         for (int i = 0; i < o; i++)
             for (int j = 0; j < o; j++)
@@ -478,8 +499,8 @@ internal sealed class ClosedShellCcsdSolver
         ct.ThrowIfCancellationRequested();
 
         // E2. Fvv_bc = F̃_bc − Σ_kld u_kl^bd (ld|kc); Foo_kj = F̃_kj + Σ_lcd u_lj^cd (kd|lc).
-        var uByVirtual = new double[v * oo * v];   // [b][(k,l,d)] = u_kl^bd
-        var uByOccupied = new double[o * o * vv];  // [j][(l,c,d)] = u_lj^cd
+        var uByVirtual = Work(Slot.UByVirtual, v * oo * v);   // [b][(k,l,d)] = u_kl^bd
+        var uByOccupied = Work(Slot.UByOccupied, o * o * vv);  // [j][(l,c,d)] = u_lj^cd
         for (int k = 0; k < o; k++)
             for (int l = 0; l < o; l++)
                 for (int b = 0; b < v; b++)

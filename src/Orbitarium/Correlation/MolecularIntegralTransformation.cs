@@ -1,4 +1,5 @@
 using MathNet.Numerics.LinearAlgebra;
+using Orbitarium.Integrals;
 
 namespace Orbitarium.Correlation;
 
@@ -36,9 +37,68 @@ public static class MolecularIntegralTransformation
             throw new OrbitariumInputException($"Coefficient matrices must all have {n} rows (basis functions), got {c1.RowCount}, {c2.RowCount}, {c3.RowCount}, {c4.RowCount}.");
         if (aoRepulsion.Length != (long)n * n * n * n)
             throw new OrbitariumInputException($"Expected N⁴ = {(long)n * n * n * n} AO repulsion integrals for {n} basis functions, got {aoRepulsion.Length}.");
-        return Transform(aoRepulsion.ToArray(), n, ToRowMajor(c1), c1.ColumnCount, ToRowMajor(c2), c2.ColumnCount,
-            ToRowMajor(c3), c3.ColumnCount, ToRowMajor(c4), c4.ColumnCount, cancellationToken);
+        return TransformRepulsion(DenseSource(aoRepulsion.ToArray(), n), n, c1, c2, c3, c4, cancellationToken);
     }
+
+    /// <summary>
+    /// Transforms AO repulsion integrals held packed (8-fold symmetry) to (pq|rs) with orbitals p ∈ c1, q ∈ c2, r ∈ c3,
+    /// s ∈ c4, reading one μ slab at a time: memory k₁N³ + k₁k₂N² + k₁k₂k₃k₄ beside the packed tensor, never a dense N⁴
+    /// copy of the AO integrals.
+    /// </summary>
+    /// <param name="aoRepulsion">The packed AO integrals.</param>
+    /// <param name="c1">N×k₁ coefficients of the first index.</param>
+    /// <param name="c2">N×k₂ coefficients of the second index.</param>
+    /// <param name="c3">N×k₃ coefficients of the third index.</param>
+    /// <param name="c4">N×k₄ coefficients of the fourth index.</param>
+    /// <param name="cancellationToken">Stops the transformation.</param>
+    /// <returns>k₁·k₂·k₃·k₄ integrals, row-major, hartree.</returns>
+    public static double[] TransformRepulsion(ElectronRepulsionTensor aoRepulsion, Matrix<double> c1, Matrix<double> c2,
+        Matrix<double> c3, Matrix<double> c4, CancellationToken cancellationToken = default)
+    {
+        ArgumentNullException.ThrowIfNull(aoRepulsion);
+        ArgumentNullException.ThrowIfNull(c1);
+        ArgumentNullException.ThrowIfNull(c2);
+        ArgumentNullException.ThrowIfNull(c3);
+        ArgumentNullException.ThrowIfNull(c4);
+        int n = aoRepulsion.FunctionCount;
+        if (c1.RowCount != n || c2.RowCount != n || c3.RowCount != n || c4.RowCount != n)
+            throw new OrbitariumInputException($"Coefficient matrices must all have {n} rows (basis functions), got {c1.RowCount}, {c2.RowCount}, {c3.RowCount}, {c4.RowCount}.");
+        return TransformRepulsion(PackedSource(aoRepulsion), n, c1, c2, c3, c4, cancellationToken);
+    }
+
+    private static double[] TransformRepulsion(ColumnSource source, int n, Matrix<double> c1, Matrix<double> c2, Matrix<double> c3,
+        Matrix<double> c4, CancellationToken cancellationToken) =>
+        Transform(source, n, ToRowMajor(c1), c1.ColumnCount, ToRowMajor(c2), c2.ColumnCount, ToRowMajor(c3), c3.ColumnCount,
+            ToRowMajor(c4), c4.ColumnCount, cancellationToken);
+
+    private static ColumnSource DenseSource(double[] dense, int n)
+    {
+        long n3 = (long)n * n * n;
+        return (start, count, buffer) =>
+        {
+            for (int t = 0; t < count; t++)
+            {
+                long flat = start + t;
+                long nu = flat % n, la = flat / ((long)n * n), sg = flat / n % n;
+                for (int mu = 0; mu < n; mu++) buffer[t * n + mu] = dense[mu * n3 + (nu * n + la) * n + sg];
+            }
+        };
+    }
+
+    private static ColumnSource PackedSource(ElectronRepulsionTensor tensor) => tensor.FillColumns;
+
+    /// <summary>Bytes <see cref="TransformRepulsion(ElectronRepulsionTensor, Matrix{double}, Matrix{double}, Matrix{double}, Matrix{double}, CancellationToken)"/>
+    /// needs at its peak beside the packed tensor, for N functions and k₁…k₄ orbitals.</summary>
+    internal static double TransformDoubles(int n, int k1, int k2, int k3, int k4)
+    {
+        double n2 = (double)n * n, n3 = n2 * n;
+        double half = (double)k1 * k2 * n2;
+        return n3 + Math.Max(k1 * n3 + half, half + (double)k1 * k2 * k3 * k4);
+    }
+
+    /// <summary>Fills <c>buffer</c>[(t − start)·N + μ] = (μν|λσ) for the flat indices t = (λ·N + σ)·N + ν in
+    /// [start, start + count).</summary>
+    internal delegate void ColumnSource(long start, int count, double[] buffer);
 
     /// <summary>Transforms an AO one-electron matrix: Σ_μν C1_μp A_μν C2_νq, returned k₁×k₂ row-major.</summary>
     /// <param name="ao">N×N AO matrix.</param>
@@ -70,11 +130,36 @@ public static class MolecularIntegralTransformation
         double nuclearRepulsionEnergyHartree, IReadOnlyList<Matrix<double>>? aoDipole = null, CancellationToken cancellationToken = default)
     {
         ArgumentNullException.ThrowIfNull(coefficients);
+        int n = coefficients.RowCount;
+        CheckDenseLength(aoRepulsion.Length, n);
+        return RestrictedHamiltonian(aoCoreHamiltonian, DenseSource(aoRepulsion.ToArray(), n), coefficients, orbitalEnergiesHartree,
+            alphaOccupiedCount, betaOccupiedCount, nuclearRepulsionEnergyHartree, aoDipole, cancellationToken);
+    }
+
+    /// <summary>The restricted MO Hamiltonian from packed AO integrals (no dense AO copy).</summary>
+    internal static MolecularOrbitalHamiltonian RestrictedHamiltonian(Matrix<double> aoCoreHamiltonian, ElectronRepulsionTensor aoRepulsion,
+        Matrix<double> coefficients, ReadOnlySpan<double> orbitalEnergiesHartree, int alphaOccupiedCount, int betaOccupiedCount,
+        double nuclearRepulsionEnergyHartree, IReadOnlyList<Matrix<double>>? aoDipole, CancellationToken cancellationToken) =>
+        RestrictedHamiltonian(aoCoreHamiltonian, PackedSource(aoRepulsion), coefficients, orbitalEnergiesHartree, alphaOccupiedCount,
+            betaOccupiedCount, nuclearRepulsionEnergyHartree, aoDipole, cancellationToken);
+
+    private static MolecularOrbitalHamiltonian RestrictedHamiltonian(Matrix<double> aoCoreHamiltonian, ColumnSource aoRepulsion,
+        Matrix<double> coefficients, ReadOnlySpan<double> orbitalEnergiesHartree, int alphaOccupiedCount, int betaOccupiedCount,
+        double nuclearRepulsionEnergyHartree, IReadOnlyList<Matrix<double>>? aoDipole, CancellationToken cancellationToken)
+    {
+        ArgumentNullException.ThrowIfNull(coefficients);
         var h = TransformOneElectron(aoCoreHamiltonian, coefficients, coefficients);
-        var g = TransformRepulsion(aoRepulsion, coefficients, coefficients, coefficients, coefficients, cancellationToken);
+        int n = coefficients.RowCount;
+        var g = TransformRepulsion(aoRepulsion, n, coefficients, coefficients, coefficients, coefficients, cancellationToken);
         var d = aoDipole is null ? null : TransformDipole(aoDipole, coefficients);
         return MolecularOrbitalHamiltonian.Restricted(coefficients.ColumnCount, alphaOccupiedCount, betaOccupiedCount,
             orbitalEnergiesHartree, h, g, nuclearRepulsionEnergyHartree, d);
+    }
+
+    private static void CheckDenseLength(int length, int n)
+    {
+        if (length != (long)n * n * n * n)
+            throw new OrbitariumInputException($"Expected N⁴ = {(long)n * n * n * n} AO repulsion integrals for {n} basis functions, got {length}.");
     }
 
     /// <summary>
@@ -98,14 +183,38 @@ public static class MolecularIntegralTransformation
         IReadOnlyList<Matrix<double>>? aoDipole = null, CancellationToken cancellationToken = default)
     {
         ArgumentNullException.ThrowIfNull(coefficientsAlpha);
+        int n = coefficientsAlpha.RowCount;
+        CheckDenseLength(aoRepulsion.Length, n);
+        return UnrestrictedHamiltonian(aoCoreHamiltonian, DenseSource(aoRepulsion.ToArray(), n), coefficientsAlpha, coefficientsBeta,
+            orbitalEnergiesAlphaHartree, orbitalEnergiesBetaHartree, alphaOccupiedCount, betaOccupiedCount, nuclearRepulsionEnergyHartree,
+            aoDipole, cancellationToken);
+    }
+
+    /// <summary>The unrestricted MO Hamiltonian from packed AO integrals (no dense AO copy).</summary>
+    internal static MolecularOrbitalHamiltonian UnrestrictedHamiltonian(Matrix<double> aoCoreHamiltonian, ElectronRepulsionTensor aoRepulsion,
+        Matrix<double> coefficientsAlpha, Matrix<double> coefficientsBeta,
+        ReadOnlySpan<double> orbitalEnergiesAlphaHartree, ReadOnlySpan<double> orbitalEnergiesBetaHartree,
+        int alphaOccupiedCount, int betaOccupiedCount, double nuclearRepulsionEnergyHartree,
+        IReadOnlyList<Matrix<double>>? aoDipole, CancellationToken cancellationToken) =>
+        UnrestrictedHamiltonian(aoCoreHamiltonian, PackedSource(aoRepulsion), coefficientsAlpha, coefficientsBeta, orbitalEnergiesAlphaHartree,
+            orbitalEnergiesBetaHartree, alphaOccupiedCount, betaOccupiedCount, nuclearRepulsionEnergyHartree, aoDipole, cancellationToken);
+
+    private static MolecularOrbitalHamiltonian UnrestrictedHamiltonian(Matrix<double> aoCoreHamiltonian, ColumnSource aoRepulsion,
+        Matrix<double> coefficientsAlpha, Matrix<double> coefficientsBeta,
+        ReadOnlySpan<double> orbitalEnergiesAlphaHartree, ReadOnlySpan<double> orbitalEnergiesBetaHartree,
+        int alphaOccupiedCount, int betaOccupiedCount, double nuclearRepulsionEnergyHartree,
+        IReadOnlyList<Matrix<double>>? aoDipole, CancellationToken cancellationToken)
+    {
+        ArgumentNullException.ThrowIfNull(coefficientsAlpha);
         ArgumentNullException.ThrowIfNull(coefficientsBeta);
         var ha = TransformOneElectron(aoCoreHamiltonian, coefficientsAlpha, coefficientsAlpha);
         var hb = TransformOneElectron(aoCoreHamiltonian, coefficientsBeta, coefficientsBeta);
         var ca = coefficientsAlpha;
         var cb = coefficientsBeta;
-        var gaa = TransformRepulsion(aoRepulsion, ca, ca, ca, ca, cancellationToken);
-        var gab = TransformRepulsion(aoRepulsion, ca, ca, cb, cb, cancellationToken);
-        var gbb = TransformRepulsion(aoRepulsion, cb, cb, cb, cb, cancellationToken);
+        int n = ca.RowCount;
+        var gaa = TransformRepulsion(aoRepulsion, n, ca, ca, ca, ca, cancellationToken);
+        var gab = TransformRepulsion(aoRepulsion, n, ca, ca, cb, cb, cancellationToken);
+        var gbb = TransformRepulsion(aoRepulsion, n, cb, cb, cb, cb, cancellationToken);
         return MolecularOrbitalHamiltonian.Unrestricted(ca.ColumnCount, alphaOccupiedCount, betaOccupiedCount,
             orbitalEnergiesAlphaHartree, orbitalEnergiesBetaHartree, ha, hb, gaa, gab, gbb, nuclearRepulsionEnergyHartree,
             aoDipole is null ? null : TransformDipole(aoDipole, ca), aoDipole is null ? null : TransformDipole(aoDipole, cb));
@@ -128,68 +237,59 @@ public static class MolecularIntegralTransformation
     }
 
     /// <summary>The four quarter-transformations on row-major arrays (c_k is N×k_k).</summary>
-    internal static double[] Transform(double[] ao, int n, double[] c1, int k1, double[] c2, int k2, double[] c3, int k3,
+    internal static double[] Transform(ColumnSource ao, int n, double[] c1, int k1, double[] c2, int k2, double[] c3, int k3,
         double[] c4, int k4, CancellationToken cancellationToken)
     {
         long n2 = (long)n * n, n3 = n2 * n;
-        // Quarter 1: X1[p, νλσ] = Σ_μ C1[μ,p] (μν|λσ)                         O(k₁ N⁴)
+        // Quarter 1: X1[p, λσν] = Σ_μ C1[μ,p] (μν|λσ)                         O(k₁ N⁴)
+        // As products C1ᵀ·AO over chunks of the flat index λσν (ν fastest, the index quarter 2 sums over), so each
+        // AO column is read once and X1 written once.
+        var c1t = Transposed(c1, n, k1);
         var x1 = new double[k1 * n3];
-        Parallel.For(0, k1, new ParallelOptions { CancellationToken = cancellationToken }, p =>
-        {
-            var dst = x1.AsSpan((int)(p * n3), (int)n3);
-            for (int mu = 0; mu < n; mu++)
+        const int chunk = 512;
+        long chunks = (n3 + chunk - 1) / chunk;
+        Parallel.For(0L, chunks, new ParallelOptions { CancellationToken = cancellationToken },
+            () => new double[chunk * n], (ci, _, columns) =>
             {
-                double c = c1[mu * k1 + p];
-                if (c == 0) continue;
-                Axpy(c, ao.AsSpan((int)(mu * n3), (int)n3), dst);
-            }
-        });
-        // Quarter 2: X2[pq, λσ] = Σ_ν C2[ν,q] X1[p, νλσ]                       O(k₁ k₂ N³)
+                long start = ci * chunk;
+                int count = (int)Math.Min(chunk, n3 - start);
+                ao(start, count, columns);
+                LinearAlgebra.TransposedProduct.Multiply(c1t, columns, x1, k1, count, n, parallel: false, cOffset: start, cRowStride: n3);
+                return columns;
+            }, _ => { });
+        // Quarter 2: X2[pq, λσ] = Σ_ν C2[ν,q] X1[p, λσν]                       O(k₁ k₂ N³), one product per p
+        var c2t = Transposed(c2, n, k2);
         var x2 = new double[(long)k1 * k2 * n2];
         Parallel.For(0, k1, new ParallelOptions { CancellationToken = cancellationToken }, p =>
-        {
-            for (int q = 0; q < k2; q++)
-            {
-                var dst = x2.AsSpan((int)((p * k2 + q) * n2), (int)n2);
-                for (int nu = 0; nu < n; nu++)
-                {
-                    double c = c2[nu * k2 + q];
-                    if (c == 0) continue;
-                    Axpy(c, x1.AsSpan((int)(p * n3 + nu * n2), (int)n2), dst);
-                }
-            }
-        });
+            LinearAlgebra.TransposedProduct.Multiply(c2t, x1, x2, k2, (int)n2, n, parallel: false, bOffset: p * n3, cOffset: p * k2 * n2));
+        // X1 is done with; when the result has its size (all orbitals), its pages are reused instead of fresh ones,
+        // which on a virtual machine cost more to fault in than the arithmetic that fills them.
+        long resultLength = (long)k1 * k2 * k3 * k4;
+        var result = resultLength == x1.LongLength ? x1 : new double[resultLength];
         x1 = null!;
-        // Quarter 3: X3[pqr, σ] = Σ_λ C3[λ,r] X2[pq, λσ]                       O(k₁ k₂ k₃ N²)
-        // Quarter 4: (pq|rs) = Σ_σ C4[σ,s] X3[pqr, σ]                          O(k₁ k₂ k₃ k₄ N)
-        var result = new double[(long)k1 * k2 * k3 * k4];
-        Parallel.For(0, k1 * k2, new ParallelOptions { CancellationToken = cancellationToken }, pq =>
-        {
-            var x3 = new double[k3 * n];
-            var src = x2.AsSpan((int)(pq * n2), (int)n2);
-            for (int r = 0; r < k3; r++)
+        // Quarter 4 then 3, per pq: Z[λ, s] = Σ_σ X2[pq, λσ] C4[σ,s];  (pq|rs) = Σ_λ C3[λ,r] Z[λ, s]
+        //                                                                       O(k₁ k₂ k₄ N² + k₁ k₂ k₃ k₄ N)
+        var c3t = Transposed(c3, n, k3);
+        var c4t = Transposed(c4, n, k4);
+        Parallel.For(0, k1 * k2, new ParallelOptions { CancellationToken = cancellationToken },
+            () => (Z: new double[n * k4], Zt: new double[k4 * n]), (pq, _, buffers) =>
             {
-                var row = x3.AsSpan(r * n, n);
+                LinearAlgebra.TransposedProduct.Multiply(x2, c4t, buffers.Z, n, k4, n, parallel: false, aOffset: pq * n2);
                 for (int la = 0; la < n; la++)
-                {
-                    double c = c3[la * k3 + r];
-                    if (c == 0) continue;
-                    Axpy(c, src.Slice(la * n, n), row);
-                }
-            }
-            var dst = result.AsSpan(pq * k3 * k4, k3 * k4);
-            for (int r = 0; r < k3; r++)
-            {
-                var row = x3.AsSpan(r * n, n);
-                for (int s = 0; s < k4; s++)
-                {
-                    double v = 0;
-                    for (int sg = 0; sg < n; sg++) v += row[sg] * c4[sg * k4 + s];
-                    dst[r * k4 + s] = v;
-                }
-            }
-        });
+                    for (int sIndex = 0; sIndex < k4; sIndex++) buffers.Zt[sIndex * n + la] = buffers.Z[la * k4 + sIndex];
+                LinearAlgebra.TransposedProduct.Multiply(c3t, buffers.Zt, result, k3, k4, n, parallel: false, cOffset: (long)pq * k3 * k4);
+                return buffers;
+            }, _ => { });
         return result;
+    }
+
+    /// <summary>The k×N transpose of an N×k row-major matrix.</summary>
+    private static double[] Transposed(double[] c, int n, int k)
+    {
+        var t = new double[k * n];
+        for (int mu = 0; mu < n; mu++)
+            for (int p = 0; p < k; p++) t[p * n + mu] = c[mu * k + p];
+        return t;
     }
 
     internal static void Axpy(double a, ReadOnlySpan<double> x, Span<double> y)

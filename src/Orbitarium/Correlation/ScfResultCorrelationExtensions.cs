@@ -33,11 +33,14 @@ public static class ScfResultCorrelationExtensions
         options ??= CorrelationOptions.Default;
         CheckReference(scf, "a correlated method");
         int n = scf.Basis.FunctionCount, m = scf.OrbitalCount;
-        double n4 = (double)n * n * n * n, m4 = (double)m * m * m * m;
+        double m4 = (double)m * m * m * m;
         bool unrestricted = scf.Reference == ScfReference.Unrestricted;
-        MemoryEstimate.Require("The AO→MO integral transformation", 2 * n4 + (unrestricted ? 3 : 1) * m4, options,
+        // Packed AO integrals (N⁴/8), the transformation's peak, and the finished blocks that wait beside it.
+        double packed = ElectronRepulsionTensor.EstimateBytes(n) / 8.0;
+        MemoryEstimate.Require("The AO→MO integral transformation",
+            packed + MolecularIntegralTransformation.TransformDoubles(n, m, m, m, m) + (unrestricted ? 2 : 0) * m4, options,
             "use a smaller basis or raise the budget (WithMemoryBudgetMebibytes).");
-        var ao = ElectronRepulsionTensor.Compute(scf.Basis, null, cancellationToken).ToDense();
+        var ao = ElectronRepulsionTensor.Compute(scf.Basis, null, cancellationToken);
         var dipole = OneElectronIntegrals.Dipole(scf.Basis, scf.Molecule.CenterOfNuclearChargeBohr);
         int na = scf.AlphaElectronCount, nb = scf.BetaElectronCount;
         if (unrestricted)
@@ -72,9 +75,11 @@ public static class ScfResultCorrelationExtensions
         int n = scf.Basis.FunctionCount, m = scf.OrbitalCount, nf = options.FrozenCoreOrbitals;
         int na = scf.AlphaElectronCount, nb = scf.BetaElectronCount;
         Correlation.Mp2.CheckFrozenCore(nf, na, nb);
-        double n4 = (double)n * n * n * n;
-        MemoryEstimate.Require("MP2", 2 * n4 + 3.0 * na * m * n * n + 3.0 * na * na * m * m, options, "use a smaller basis or raise the budget (WithMemoryBudgetMebibytes).");
-        var ao = ElectronRepulsionTensor.Compute(scf.Basis, null, cancellationToken).ToDense();
+        double packed = ElectronRepulsionTensor.EstimateBytes(n) / 8.0;
+        int o = Math.Max(na, nb) - nf, v = m - Math.Min(na, nb);
+        MemoryEstimate.Require("MP2", packed + MolecularIntegralTransformation.TransformDoubles(n, o, v, o, v) + 3.0 * o * v * o * v, options,
+            "use a smaller basis or raise the budget (WithMemoryBudgetMebibytes).");
+        var ao = ElectronRepulsionTensor.Compute(scf.Basis, null, cancellationToken);
         Matrix<double> Occ(Matrix<double> c, int occ) => c.SubMatrix(0, n, nf, occ - nf);
         Matrix<double> Vir(Matrix<double> c, int occ) => c.SubMatrix(0, n, occ, m - occ);
         if (scf.Reference == ScfReference.Restricted)

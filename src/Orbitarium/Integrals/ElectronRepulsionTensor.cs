@@ -86,6 +86,25 @@ public sealed class ElectronRepulsionTensor
     /// about 17 GB).</summary>
     public static int MaxFunctionCount => 360;
 
+    /// <summary>Writes (μν|λσ) for all μ and the flat indices t = (λ·N + σ)·N + ν in [start, start + count) into
+    /// <paramref name="buffer"/>[(t − start)·N + μ]: the columns a transformation over μ reads, without a dense N⁴ copy.</summary>
+    internal void FillColumns(long start, int count, double[] buffer)
+    {
+        int n = FunctionCount;
+        for (int t = 0; t < count; t++)
+        {
+            long flat = start + t;
+            int nu = (int)(flat % n), sg = (int)(flat / n % n), la = (int)(flat / ((long)n * n));
+            long kl = la >= sg ? (long)la * (la + 1) / 2 + sg : (long)sg * (sg + 1) / 2 + la;
+            int row = t * n;
+            for (int mu = 0; mu < n; mu++)
+            {
+                long ij = mu >= nu ? (long)mu * (mu + 1) / 2 + nu : (long)nu * (nu + 1) / 2 + mu;
+                buffer[row + mu] = _values[ij >= kl ? ij * (ij + 1) / 2 + kl : kl * (kl + 1) / 2 + ij];
+            }
+        }
+    }
+
     /// <summary>A dense copy, element [((i·N + j)·N + k)·N + l] = (ij|kl). Meant for small bases (N⁴ doubles).</summary>
     /// <exception cref="InvalidOperationException">N⁴ exceeds 2^27 elements (1 GiB).</exception>
     public double[] ToDense()

@@ -29,22 +29,27 @@ internal static class TransposedProduct
     /// <param name="parallel">Spread row blocks of C over the thread pool (false inside an outer parallel loop).</param>
     /// <param name="aOffset">Where A starts in <paramref name="a"/>.</param>
     /// <param name="bOffset">Where B starts in <paramref name="b"/>.</param>
+    /// <param name="cOffset">Where C starts in <paramref name="c"/>.</param>
+    /// <param name="cRowStride">Distance between rows of C in <paramref name="c"/> (default N: C contiguous).</param>
     public static void Multiply(double[] a, double[] b, double[] c, int m, int n, int k, double alpha = 1.0,
-        bool accumulate = false, bool parallel = true, long aOffset = 0, long bOffset = 0)
+        bool accumulate = false, bool parallel = true, long aOffset = 0, long bOffset = 0, long cOffset = 0, long cRowStride = 0)
     {
-        if (aOffset < 0 || bOffset < 0 || aOffset + (long)m * k > a.Length || bOffset + (long)n * k > b.Length || (long)m * n > c.Length)
+        long ldc = cRowStride == 0 ? n : cRowStride;
+        if (aOffset < 0 || bOffset < 0 || cOffset < 0 || ldc < n || aOffset + (long)m * k > a.Length || bOffset + (long)n * k > b.Length
+            || (m > 0 && cOffset + (m - 1) * ldc + n > c.Length))
             throw new ArgumentException($"Arrays too short for a {m}×{k} by ({n}×{k})ᵀ product.");
-        if (!accumulate) Array.Clear(c, 0, m * n);
+        if (!accumulate)
+            for (int i = 0; i < m; i++) Array.Clear(c, (int)(cOffset + i * ldc), n);
         if (m == 0 || n == 0 || k == 0) return;
         const int rowsPerBlock = 16;
         int blocks = (m + rowsPerBlock - 1) / rowsPerBlock;
         if (parallel && blocks > 1 && (double)m * n * k > 2e5)
-            Parallel.For(0, blocks, blk => RowBlock(a, aOffset, b, bOffset, c, blk * rowsPerBlock, Math.Min(m, (blk + 1) * rowsPerBlock), n, k, alpha));
+            Parallel.For(0, blocks, blk => RowBlock(a, aOffset, b, bOffset, c, cOffset, ldc, blk * rowsPerBlock, Math.Min(m, (blk + 1) * rowsPerBlock), n, k, alpha));
         else
-            RowBlock(a, aOffset, b, bOffset, c, 0, m, n, k, alpha);
+            RowBlock(a, aOffset, b, bOffset, c, cOffset, ldc, 0, m, n, k, alpha);
     }
 
-    private static void RowBlock(double[] a, long aOffset, double[] b, long bOffset, double[] c, int rowStart, int rowEnd, int n, int k, double alpha)
+    private static void RowBlock(double[] a, long aOffset, double[] b, long bOffset, double[] c, long cOffset, long ldc, int rowStart, int rowEnd, int n, int k, double alpha)
     {
         for (int k0 = 0; k0 < k; k0 += PanelLength)
         {
@@ -53,18 +58,18 @@ internal static class TransposedProduct
             for (; j + 4 <= n; j += 4)
             {
                 int i = rowStart;
-                for (; i + 2 <= rowEnd; i += 2) Tile2x4(a, aOffset + (long)i * k + k0, b, bOffset + (long)j * k + k0, c, i, j, n, k, len, alpha);
+                for (; i + 2 <= rowEnd; i += 2) Tile2x4(a, aOffset + (long)i * k + k0, b, bOffset + (long)j * k + k0, c, cOffset + i * ldc + j, ldc, k, len, alpha);
                 for (; i < rowEnd; i++)
-                    for (int jj = j; jj < j + 4; jj++) c[(long)i * n + jj] += alpha * Dot(a, aOffset + (long)i * k + k0, b, bOffset + (long)jj * k + k0, len);
+                    for (int jj = j; jj < j + 4; jj++) c[cOffset + i * ldc + jj] += alpha * Dot(a, aOffset + (long)i * k + k0, b, bOffset + (long)jj * k + k0, len);
             }
             for (; j < n; j++)
                 for (int i = rowStart; i < rowEnd; i++)
-                    c[(long)i * n + j] += alpha * Dot(a, aOffset + (long)i * k + k0, b, bOffset + (long)j * k + k0, len);
+                    c[cOffset + i * ldc + j] += alpha * Dot(a, aOffset + (long)i * k + k0, b, bOffset + (long)j * k + k0, len);
         }
     }
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    private static void Tile2x4(double[] a, long aStart, double[] b, long bStart, double[] c, int i, int j, int n, int k, int len, double alpha)
+    private static void Tile2x4(double[] a, long aStart, double[] b, long bStart, double[] c, long cStart, long ldc, int k, int len, double alpha)
     {
         ref double a0 = ref Unsafe.Add(ref MemoryMarshal.GetArrayDataReference(a), (nint)aStart);
         ref double a1 = ref Unsafe.Add(ref a0, k);
@@ -101,7 +106,7 @@ internal static class TransposedProduct
             r00 += x0 * y0; r01 += x0 * y1; r02 += x0 * y2; r03 += x0 * y3;
             r10 += x1 * y0; r11 += x1 * y1; r12 += x1 * y2; r13 += x1 * y3;
         }
-        long c0 = (long)i * n + j, c1 = c0 + n;
+        long c0 = cStart, c1 = c0 + ldc;
         c[c0] += alpha * r00; c[c0 + 1] += alpha * r01; c[c0 + 2] += alpha * r02; c[c0 + 3] += alpha * r03;
         c[c1] += alpha * r10; c[c1 + 1] += alpha * r11; c[c1 + 2] += alpha * r12; c[c1 + 3] += alpha * r13;
     }

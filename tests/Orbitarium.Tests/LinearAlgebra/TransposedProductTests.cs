@@ -35,6 +35,31 @@ public class TransposedProductTests
     }
 
     [Fact]
+    public void Writes_into_a_block_of_a_wider_matrix_and_leaves_the_rest_alone()
+    {
+        // C as a 3×4 block at row 1, column 2 of a 5×9 matrix (row stride 9).
+        var rng = new Random(11);
+        var a = new double[3 * 6];
+        var b = new double[4 * 6];
+        for (int x = 0; x < a.Length; x++) a[x] = rng.NextDouble();
+        for (int x = 0; x < b.Length; x++) b[x] = rng.NextDouble();
+        var c = Enumerable.Repeat(-7.0, 5 * 9).ToArray();
+        TransposedProduct.Multiply(a, b, c, 3, 4, 6, cOffset: 1 * 9 + 2, cRowStride: 9);
+        for (int row = 0; row < 5; row++)
+            for (int col = 0; col < 9; col++)
+            {
+                bool inside = row >= 1 && row < 4 && col >= 2 && col < 6;
+                double expected = -7.0;
+                if (inside)
+                {
+                    expected = 0;
+                    for (int p = 0; p < 6; p++) expected += a[(row - 1) * 6 + p] * b[(col - 2) * 6 + p];
+                }
+                Assert.Equal(expected, c[row * 9 + col], 1e-14);
+            }
+    }
+
+    [Fact]
     public void Overwrites_unless_asked_to_accumulate()
     {
         var a = new double[] { 1, 2 };

@@ -7,13 +7,16 @@ namespace Orbitarium.Correlation;
 /// spatial orbitals, with the singles folded into T1-dressed integrals.
 /// </summary>
 /// <remarks>
-/// Equations of T. Helgaker, P. Jørgensen and J. Olsen, <i>Molecular Electronic-Structure Theory</i> (Wiley 2000),
-/// §13.7.5, in the T1-transformed Hamiltonian of H. Koch, O. Christiansen, R. Kobayashi, P. Jørgensen and T. Helgaker,
-/// Chem. Phys. Lett. 228, 233 (1994): g̃_pqrs = Σ X_tp Y_uq X_vr Y_ws (tu|vw) with X = 1 − t1ᵀ, Y = 1 + t1. The dressing
-/// composes additively (t1ᵀ·t1ᵀ = 0), so the integrals are re-dressed in place with the change of t1 each iteration
-/// and need one copy of the active (pq|rs). The (ia|jb) block is unchanged by the dressing. Every O(o²v⁴), O(o³v³)
-/// and O(o⁴v²) contraction is a <see cref="TransposedProduct"/>; the particle–particle ladder uses the (ai)↔(bj)
-/// symmetry of its result and runs over pairs i ≤ j only.
+/// The singles are folded into the T1-transformed Hamiltonian of H. Koch, O. Christiansen, R. Kobayashi,
+/// P. Jørgensen and T. Helgaker, Chem. Phys. Lett. 228, 233 (1994): g̃_pqrs = Σ X_tp Y_uq X_vr Y_ws (tu|vw) with
+/// X = 1 − t1ᵀ, Y = 1 + t1, and F̃ built from g̃. The singles residual and the ladder and Fock terms of the doubles are
+/// those of T. Helgaker, P. Jørgensen and J. Olsen, <i>Molecular Electronic-Structure Theory</i> (Wiley 2000),
+/// §13.7.5; the ring terms are the closed-shell W_mbej / W_mbje intermediates (the spin-orbital ones of Stanton,
+/// Gauss, Watts and Bartlett 1991 summed over spin). The tests hold every term to the αβ block of the spin-orbital
+/// residual. The dressing composes additively (t1ᵀ·t1ᵀ = 0), so the integrals are re-dressed in place by the change
+/// of t1 each iteration; the (ia|jb) block is unchanged by it. Every O(o²v⁴), O(o³v³) and O(o⁴v²) contraction is a
+/// <see cref="TransposedProduct"/>; the particle–particle ladder uses the (ai)↔(bj) symmetry of its result and runs
+/// over pairs i ≤ j only.
 /// </remarks>
 internal sealed class ClosedShellCcsdSolver
 {
@@ -402,7 +405,7 @@ internal sealed class ClosedShellCcsdSolver
 
         var r2 = Work(Slot.Doubles, t2.Length);
         Array.Clear(r2);
-        // A2 first part and the particle–particle ladder Σ_cd t_ij^cd (ac|bd), over pairs i ≤ j.
+        // (ai|bj) and the particle–particle ladder Σ_cd t_ij^cd (ac|bd), over pairs i ≤ j.
         int pairCount = o * (o + 1) / 2;
         var pairs = new (int I, int J)[pairCount];
         var tPairs = Work(Slot.Pairs, pairCount * vv);
@@ -438,7 +441,7 @@ internal sealed class ClosedShellCcsdSolver
                     for (int b = 0; b < v; b++)
                         r2[((i * o + j) * v + a) * v + b] += G(o + a, i, o + b, j);
 
-        // B2: Σ_kl t_kl^ab W_klij, W_klij = (ki|lj) + Σ_cd t_ij^cd (kc|ld).
+        // Hole–hole ladder: Σ_kl t_kl^ab W_klij, W_klij = (ki|lj) + Σ_cd t_ij^cd (kc|ld).
         var w = Work(Slot.HoleLadder, oo * oo);
         TransposedProduct.Multiply(_ovovByOccupiedPair, t2, w, oo, oo, vv);
         var wT = Work(Slot.HoleLadderTransposed, oo * oo);   // [ij][kl]
@@ -498,7 +501,7 @@ internal sealed class ClosedShellCcsdSolver
                         x[((i * o + j) * v + a) * v + b] = ring[(i * v + a) * ov + j * v + b] + ringCrossed[(j * v + a) * ov + i * v + b];
         ct.ThrowIfCancellationRequested();
 
-        // E2. Fvv_bc = F̃_bc − Σ_kld u_kl^bd (ld|kc); Foo_kj = F̃_kj + Σ_lcd u_lj^cd (kd|lc).
+        // Fock terms: Fvv_bc = F̃_bc − Σ_kld u_kl^bd (ld|kc); Foo_kj = F̃_kj + Σ_lcd u_lj^cd (kd|lc).
         var uByVirtual = Work(Slot.UByVirtual, v * oo * v);   // [b][(k,l,d)] = u_kl^bd
         var uByOccupied = Work(Slot.UByOccupied, o * o * vv);  // [j][(l,c,d)] = u_lj^cd
         for (int k = 0; k < o; k++)

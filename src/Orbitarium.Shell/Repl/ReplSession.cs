@@ -32,7 +32,7 @@ public sealed partial class ReplSession
         WorkingDirectory = Path.GetFullPath(_options.WorkingDirectory);
         Settings = _options.Settings ?? new ConsoleSettings();
         Renderers = _options.Renderers ?? ValueRendererRegistry.CreateDefault();
-        Globals = new ScriptGlobals(Show, _options.Args, Settings, Renderers, Path.Combine(WorkingDirectory, "plots"), _live);
+        Globals = new ScriptGlobals(Show, _options.Args, Settings, Renderers, Path.Combine(WorkingDirectory, "plots"), new SessionProgress(_live, _live));
         Globals.ScriptDirectory = WorkingDirectory;
         _scriptOptions = ScriptEnvironment.CreateOptions(null, WorkingDirectory);
         _start = Task.Run(StartAsync);
@@ -208,7 +208,7 @@ public sealed partial class ReplSession
             return new SubmissionResult(SubmissionStatus.Cancelled, null, false, elapsed, message);
         }
 
-        if (_live.Count > 0) _console.MarkupLine($"[grey]{_live.Count} SCF iteration(s)[/]");
+        if (_live.Count > 0) _console.MarkupLine($"[grey]{_live.Summary}[/]");
         var newState = run.Result;
         lock (_gate)
         {

@@ -18,9 +18,9 @@ public sealed class ScriptGlobals
     /// <param name="settings">Display settings of the session.</param>
     /// <param name="renderers">The renderer registry used for values shown at the prompt.</param>
     /// <param name="plotFolder">Folder where figures are written.</param>
-    /// <param name="progress">Receives SCF iterations (a live table at the prompt); null discards them.</param>
+    /// <param name="progress">Receives SCF and correlation iterations (a live table at the prompt); null discards them.</param>
     public ScriptGlobals(Action<object?> print, IReadOnlyList<string> args, ConsoleSettings settings,
-        ValueRendererRegistry renderers, string plotFolder, IProgress<ScfIteration>? progress = null)
+        ValueRendererRegistry renderers, string plotFolder, SessionProgress? progress = null)
     {
         ArgumentNullException.ThrowIfNull(print);
         ArgumentNullException.ThrowIfNull(args);
@@ -32,14 +32,15 @@ public sealed class ScriptGlobals
         Settings = settings;
         Renderers = renderers;
         PlotFolder = plotFolder;
-        Progress = progress ?? new Progress<ScfIteration>();
+        Progress = progress ?? SessionProgress.Discard;
     }
 
     /// <summary>
-    /// Pass to SCF runs to watch their iterations live at the prompt:
-    /// <c>water.WithBasis(basis).RunRhf(Progress, Token)</c>. In <c>orbitarium run</c> scripts the iterations are not shown.
+    /// Pass to SCF runs and correlated methods to watch their iterations live at the prompt:
+    /// <c>water.WithBasis(basis).RunRhf(Progress, Token)</c>, <c>rhf.CcsdT(null, Progress, Token)</c>. In
+    /// <c>orbitarium run</c> scripts the iterations are not shown.
     /// </summary>
-    public IProgress<ScfIteration> Progress { get; }
+    public SessionProgress Progress { get; }
 
     /// <summary>Arguments given after the script file to <c>orbitarium run FILE.csx [args…]</c>; empty at the prompt.</summary>
     public IReadOnlyList<string> Args { get; }

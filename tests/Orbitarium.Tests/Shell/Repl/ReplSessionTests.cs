@@ -193,6 +193,22 @@ public class ReplSessionTests
             Assert.Equal(SubmissionStatus.Accepted, result.Status);
             Assert.Contains("3 SCF iteration(s)", output.ToString());
         }
+
+        [Fact]
+        public async Task The_same_Progress_takes_an_SCF_and_a_coupled_cluster_run_and_counts_both()
+        {
+            // One global serves both kinds of report, so a user need not know which progress type a method takes.
+            var output = new StringWriter();
+            var session = TestConsoles.Session(output);
+            await session.SubmitAsync("var h2 = Molecule.Empty.AddAtom(\"H\", 0, 0, 0).AddAtom(\"H\", 0, 0, 0.74);");
+
+            var result = await session.SubmitAsync(
+                "var cc = h2.WithBasis(\"6-31G**\").RunRhf(Progress, Token).Ccsd(null, Progress, Token);");
+
+            Assert.Equal(SubmissionStatus.Accepted, result.Status);
+            string text = output.ToString();
+            Assert.Matches(@"\d+ SCF iteration\(s\), \d+ correlation iteration\(s\)", text);
+        }
     }
 
     public class IsCompleteSubmission

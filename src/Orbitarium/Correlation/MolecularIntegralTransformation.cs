@@ -241,6 +241,10 @@ public static class MolecularIntegralTransformation
         double[] c4, int k4, CancellationToken cancellationToken)
     {
         long n2 = (long)n * n, n3 = n2 * n;
+        long largest = Math.Max(Math.Max((long)k1 * n3, (long)k1 * k2 * n2), (long)k1 * k2 * k3 * k4);
+        if (largest > Array.MaxLength)
+            throw new OrbitariumInputException(
+                $"The integral transformation for {n} basis functions would need an array of {largest} numbers, more than .NET allows in one array ({Array.MaxLength}): use a smaller basis.");
         // Quarter 1: X1[p, λσν] = Σ_μ C1[μ,p] (μν|λσ)                         O(k₁ N⁴)
         // As products C1ᵀ·AO over chunks of the flat index λσν (ν fastest, the index quarter 2 sums over), so each
         // AO column is read once and X1 written once.

@@ -154,6 +154,21 @@ public class ClosedShellCcsdTests
         }
     }
 
+    public class Reproducibility
+    {
+        [Fact]
+        public void Repeats_to_the_last_bit()
+        {
+            // Every parallel step writes each element from one thread in a fixed order (TransposedProduct, the
+            // ladder over virtuals) or reduces in set order (FixedOrderParallel in (T)).
+            var rhf = CrawfordWater().WithBasis("6-31G*").RunRhf();
+            var first = rhf.CcsdT();
+            var second = rhf.CcsdT();
+            Assert.Equal(BitConverter.DoubleToInt64Bits(first.TotalEnergyHartree), BitConverter.DoubleToInt64Bits(second.TotalEnergyHartree));
+            Assert.Equal(first.Iterations, second.Iterations);
+        }
+    }
+
     public class InPlaceDressing
     {
         [Fact]

@@ -275,66 +275,68 @@ internal sealed class ClosedShellCcsdSolver
         }
         if (!any) return;
         // The transformations act on the full array (frozen rows and columns are carried along unchanged in
-        // meaning: they are never read with a dressed index by the equations).
+        // meaning: they are never read with a dressed index by the equations). Each is a product
+        // (TransposedProduct) of Δ with the occupied or virtual rows it reads, which are never the rows it writes.
         int n = _stride, f = _frozen, occ = f, vir = f + o;
         long n3 = (long)n * n * n, n2 = (long)n * n;
-        // Index 1 (X = 1 − Δᵀ): row a −= Σ_k Δ_k^a row k. Rows k are occupied and unchanged.
-        Parallel.For(0, v, a =>
+        var negDeltaT = new double[v * o];   // [a][k] = −Δ_k^a
+        for (int k = 0; k < o; k++)
+            for (int a = 0; a < v; a++) negDeltaT[a * o + k] = -delta[k * v + a];
+        const int chunk = 2048;
+        // Index 1 (X = 1 − Δᵀ): row a −= Σ_k Δ_k^a row k, over the n³ columns in chunks.
+        long chunks1 = (n3 + chunk - 1) / chunk;
+        Parallel.For(0L, chunks1, () => new double[chunk * o], (ci, _, columns) =>
         {
-            var target = _g.AsSpan((int)((vir + a) * n3), (int)n3);
+            long start = ci * chunk;
+            int count = (int)Math.Min(chunk, n3 - start);
             for (int k = 0; k < o; k++)
             {
-                double s = -delta[k * v + a];
-                if (s != 0) Axpy(s, _g.AsSpan((int)((occ + k) * n3), (int)n3), target);
+                long row = (occ + k) * n3 + start;
+                for (int t = 0; t < count; t++) columns[t * o + k] = _g[row + t];
             }
-        });
-        // Index 2 (Y = 1 + Δ): in each block p, row i += Σ_c Δ_i^c row c.
-        Parallel.For(0, n, p =>
+            TransposedProduct.Multiply(negDeltaT, columns, _g, v, count, o, accumulate: true, parallel: false,
+                cOffset: vir * n3 + start, cRowStride: n3);
+            return columns;
+        }, _ => { });
+        // Index 2 (Y = 1 + Δ): in each block p, row i += Σ_c Δ_i^c row c, over the n² columns in chunks.
+        Parallel.For(0, n, () => new double[chunk * v], (p, _, columns) =>
         {
-            for (int i = 0; i < o; i++)
+            long block = p * n3;
+            for (long start = 0; start < n2; start += chunk)
             {
-                var target = _g.AsSpan((int)(p * n3 + (occ + i) * n2), (int)n2);
+                int count = (int)Math.Min(chunk, n2 - start);
                 for (int c = 0; c < v; c++)
                 {
-                    double s = delta[i * v + c];
-                    if (s != 0) Axpy(s, _g.AsSpan((int)(p * n3 + (vir + c) * n2), (int)n2), target);
+                    long row = block + (vir + c) * n2 + start;
+                    for (int t = 0; t < count; t++) columns[t * v + c] = _g[row + t];
                 }
+                TransposedProduct.Multiply(delta, columns, _g, o, count, v, accumulate: true, parallel: false,
+                    cOffset: block + occ * n2 + start, cRowStride: n2);
             }
-        });
-        // Indices 3 and 4, within each (p, q) block of n×n.
-        Parallel.For(0, n, p =>
+            return columns;
+        }, _ => { });
+        // Indices 3 and 4, within each (p, q) block of n×n: rows a −= Σ_k Δ_k^a rows k; columns i += Σ_c Δ_i^c columns c.
+        Parallel.For(0, n, () => new double[n * o], (p, _, columns) =>
         {
             for (int q = 0; q < n; q++)
             {
-                int block = (int)(p * n3 + q * n2);
-                for (int a = 0; a < v; a++)
+                long block = p * n3 + q * n2;
+                for (int k = 0; k < o; k++)
                 {
-                    var target = _g.AsSpan(block + (vir + a) * n, n);
-                    for (int k = 0; k < o; k++)
-                    {
-                        double s = -delta[k * v + a];
-                        if (s != 0) Axpy(s, _g.AsSpan(block + (occ + k) * n, n), target);
-                    }
+                    long row = block + (long)(occ + k) * n;
+                    for (int sIndex = 0; sIndex < n; sIndex++) columns[sIndex * o + k] = _g[row + sIndex];
                 }
-                for (int r = 0; r < n; r++)
-                {
-                    int row = block + r * n;
-                    for (int i = 0; i < o; i++)
-                    {
-                        double add = 0;
-                        for (int c = 0; c < v; c++) add += delta[i * v + c] * _g[row + vir + c];
-                        _g[row + occ + i] += add;
-                    }
-                }
+                TransposedProduct.Multiply(negDeltaT, columns, _g, v, n, o, accumulate: true, parallel: false,
+                    cOffset: block + (long)vir * n, cRowStride: n);
+                TransposedProduct.Multiply(_g, delta, _g, n, o, v, accumulate: true, parallel: false,
+                    aOffset: block + vir, aRowStride: n, cOffset: block + occ, cRowStride: n);
             }
-        });
+            return columns;
+        }, _ => { });
         Array.Copy(t1, _dressedWith, t1.Length);
     }
 
-    private static void Axpy(double s, ReadOnlySpan<double> x, Span<double> y)
-    {
-        for (int p = 0; p < x.Length; p++) y[p] += s * x[p];
-    }
+    private static void Axpy(double s, ReadOnlySpan<double> x, Span<double> y) => MolecularIntegralTransformation.Axpy(s, x, y);
 
     /// <summary>The dressed Fock matrix F̃ = Xᵀ h_fc Y + Σ_k [2 g̃_pqkk − g̃_pkkq] over the active orbitals.</summary>
     private double[] DressedFock()

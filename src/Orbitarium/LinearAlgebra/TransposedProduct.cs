@@ -31,11 +31,17 @@ internal static class TransposedProduct
     /// <param name="bOffset">Where B starts in <paramref name="b"/>.</param>
     /// <param name="cOffset">Where C starts in <paramref name="c"/>.</param>
     /// <param name="cRowStride">Distance between rows of C in <paramref name="c"/> (default N: C contiguous).</param>
+    /// <param name="aRowStride">Distance between rows of A (default K).</param>
+    /// <param name="bRowStride">Distance between rows of B (default K).</param>
     public static void Multiply(double[] a, double[] b, double[] c, int m, int n, int k, double alpha = 1.0,
-        bool accumulate = false, bool parallel = true, long aOffset = 0, long bOffset = 0, long cOffset = 0, long cRowStride = 0)
+        bool accumulate = false, bool parallel = true, long aOffset = 0, long bOffset = 0, long cOffset = 0, long cRowStride = 0,
+        long aRowStride = 0, long bRowStride = 0)
     {
         long ldc = cRowStride == 0 ? n : cRowStride;
-        if (aOffset < 0 || bOffset < 0 || cOffset < 0 || ldc < n || aOffset + (long)m * k > a.Length || bOffset + (long)n * k > b.Length
+        long lda = aRowStride == 0 ? k : aRowStride;
+        long ldb = bRowStride == 0 ? k : bRowStride;
+        if (aOffset < 0 || bOffset < 0 || cOffset < 0 || ldc < n || lda < k || ldb < k
+            || (m > 0 && aOffset + (m - 1) * lda + k > a.Length) || (n > 0 && bOffset + (n - 1) * ldb + k > b.Length)
             || (m > 0 && cOffset + (m - 1) * ldc + n > c.Length))
             throw new ArgumentException($"Arrays too short for a {m}×{k} by ({n}×{k})ᵀ product.");
         if (!accumulate)
@@ -44,12 +50,13 @@ internal static class TransposedProduct
         const int rowsPerBlock = 16;
         int blocks = (m + rowsPerBlock - 1) / rowsPerBlock;
         if (parallel && blocks > 1 && (double)m * n * k > 2e5)
-            Parallel.For(0, blocks, blk => RowBlock(a, aOffset, b, bOffset, c, cOffset, ldc, blk * rowsPerBlock, Math.Min(m, (blk + 1) * rowsPerBlock), n, k, alpha));
+            Parallel.For(0, blocks, blk => RowBlock(a, aOffset, lda, b, bOffset, ldb, c, cOffset, ldc, blk * rowsPerBlock, Math.Min(m, (blk + 1) * rowsPerBlock), n, k, alpha));
         else
-            RowBlock(a, aOffset, b, bOffset, c, cOffset, ldc, 0, m, n, k, alpha);
+            RowBlock(a, aOffset, lda, b, bOffset, ldb, c, cOffset, ldc, 0, m, n, k, alpha);
     }
 
-    private static void RowBlock(double[] a, long aOffset, double[] b, long bOffset, double[] c, long cOffset, long ldc, int rowStart, int rowEnd, int n, int k, double alpha)
+    private static void RowBlock(double[] a, long aOffset, long lda, double[] b, long bOffset, long ldb, double[] c, long cOffset, long ldc,
+        int rowStart, int rowEnd, int n, int k, double alpha)
     {
         for (int k0 = 0; k0 < k; k0 += PanelLength)
         {
@@ -58,25 +65,25 @@ internal static class TransposedProduct
             for (; j + 4 <= n; j += 4)
             {
                 int i = rowStart;
-                for (; i + 2 <= rowEnd; i += 2) Tile2x4(a, aOffset + (long)i * k + k0, b, bOffset + (long)j * k + k0, c, cOffset + i * ldc + j, ldc, k, len, alpha);
+                for (; i + 2 <= rowEnd; i += 2) Tile2x4(a, aOffset + i * lda + k0, lda, b, bOffset + j * ldb + k0, ldb, c, cOffset + i * ldc + j, ldc, len, alpha);
                 for (; i < rowEnd; i++)
-                    for (int jj = j; jj < j + 4; jj++) c[cOffset + i * ldc + jj] += alpha * Dot(a, aOffset + (long)i * k + k0, b, bOffset + (long)jj * k + k0, len);
+                    for (int jj = j; jj < j + 4; jj++) c[cOffset + i * ldc + jj] += alpha * Dot(a, aOffset + i * lda + k0, b, bOffset + jj * ldb + k0, len);
             }
             for (; j < n; j++)
                 for (int i = rowStart; i < rowEnd; i++)
-                    c[cOffset + i * ldc + j] += alpha * Dot(a, aOffset + (long)i * k + k0, b, bOffset + (long)j * k + k0, len);
+                    c[cOffset + i * ldc + j] += alpha * Dot(a, aOffset + i * lda + k0, b, bOffset + j * ldb + k0, len);
         }
     }
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    private static void Tile2x4(double[] a, long aStart, double[] b, long bStart, double[] c, long cStart, long ldc, int k, int len, double alpha)
+    private static void Tile2x4(double[] a, long aStart, long lda, double[] b, long bStart, long ldb, double[] c, long cStart, long ldc, int len, double alpha)
     {
         ref double a0 = ref Unsafe.Add(ref MemoryMarshal.GetArrayDataReference(a), (nint)aStart);
-        ref double a1 = ref Unsafe.Add(ref a0, k);
+        ref double a1 = ref Unsafe.Add(ref a0, (nint)lda);
         ref double b0 = ref Unsafe.Add(ref MemoryMarshal.GetArrayDataReference(b), (nint)bStart);
-        ref double b1 = ref Unsafe.Add(ref b0, k);
-        ref double b2 = ref Unsafe.Add(ref b1, k);
-        ref double b3 = ref Unsafe.Add(ref b2, k);
+        ref double b1 = ref Unsafe.Add(ref b0, (nint)ldb);
+        ref double b2 = ref Unsafe.Add(ref b1, (nint)ldb);
+        ref double b3 = ref Unsafe.Add(ref b2, (nint)ldb);
         int w = Vector<double>.Count;
         var s00 = Vector<double>.Zero; var s01 = Vector<double>.Zero; var s02 = Vector<double>.Zero; var s03 = Vector<double>.Zero;
         var s10 = Vector<double>.Zero; var s11 = Vector<double>.Zero; var s12 = Vector<double>.Zero; var s13 = Vector<double>.Zero;

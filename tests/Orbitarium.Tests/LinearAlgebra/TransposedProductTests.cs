@@ -60,6 +60,26 @@ public class TransposedProductTests
     }
 
     [Fact]
+    public void Reads_A_and_B_as_blocks_of_wider_matrices()
+    {
+        // A: 5×3 block at column 4 of rows 9 wide; B: 6×3 block at column 1 of rows 7 wide.
+        var rng = new Random(13);
+        var a = new double[5 * 9];
+        var b = new double[6 * 7];
+        for (int x = 0; x < a.Length; x++) a[x] = rng.NextDouble();
+        for (int x = 0; x < b.Length; x++) b[x] = rng.NextDouble();
+        var c = new double[5 * 6];
+        TransposedProduct.Multiply(a, b, c, 5, 6, 3, aOffset: 4, aRowStride: 9, bOffset: 1, bRowStride: 7);
+        for (int i = 0; i < 5; i++)
+            for (int j = 0; j < 6; j++)
+            {
+                double expected = 0;
+                for (int p = 0; p < 3; p++) expected += a[i * 9 + 4 + p] * b[j * 7 + 1 + p];
+                Assert.Equal(expected, c[i * 6 + j], 1e-14);
+            }
+    }
+
+    [Fact]
     public void Overwrites_unless_asked_to_accumulate()
     {
         var a = new double[] { 1, 2 };

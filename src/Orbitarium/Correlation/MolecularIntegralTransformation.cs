@@ -69,7 +69,7 @@ public static class MolecularIntegralTransformation
     private static double[] TransformRepulsion(ColumnSource source, int n, Matrix<double> c1, Matrix<double> c2, Matrix<double> c3,
         Matrix<double> c4, CancellationToken cancellationToken) =>
         Transform(source, n, ToRowMajor(c1), c1.ColumnCount, ToRowMajor(c2), c2.ColumnCount, ToRowMajor(c3), c3.ColumnCount,
-            ToRowMajor(c4), c4.ColumnCount, cancellationToken);
+            ToRowMajor(c4), c4.ColumnCount, cancellationToken, firstPairSymmetric: ReferenceEquals(c1, c2) || c1.Equals(c2));
 
     private static ColumnSource DenseSource(double[] dense, int n)
     {
@@ -238,7 +238,7 @@ public static class MolecularIntegralTransformation
 
     /// <summary>The four quarter-transformations on row-major arrays (c_k is N×k_k).</summary>
     internal static double[] Transform(ColumnSource ao, int n, double[] c1, int k1, double[] c2, int k2, double[] c3, int k3,
-        double[] c4, int k4, CancellationToken cancellationToken)
+        double[] c4, int k4, CancellationToken cancellationToken, bool firstPairSymmetric = false)
     {
         long n2 = (long)n * n, n3 = n2 * n;
         long largest = Math.Max(Math.Max((long)k1 * n3, (long)k1 * k2 * n2), (long)k1 * k2 * k3 * k4);
@@ -261,11 +261,27 @@ public static class MolecularIntegralTransformation
                 LinearAlgebra.TransposedProduct.Multiply(c1t, columns, x1, k1, count, n, parallel: false, cOffset: start, cRowStride: n3);
                 return columns;
             }, _ => { });
-        // Quarter 2: X2[pq, λσ] = Σ_ν C2[ν,q] X1[p, λσν]                       O(k₁ k₂ N³), one product per p
+        // Quarter 2: X2[pq, λσ] = Σ_ν C2[ν,q] X1[p, λσν]                       O(k₁ k₂ N³), one product per p.
+        // With the same orbitals on both indices (pq|rs) = (qp|rs): only q ≤ p is built, in triangular order, and
+        // mirrored at the end, which halves quarters 2 to 4 and the X2 array.
+        bool half = firstPairSymmetric && k1 == k2;
         var c2t = Transposed(c2, n, k2);
-        var x2 = new double[(long)k1 * k2 * n2];
+        int pairCount = half ? k1 * (k1 + 1) / 2 : k1 * k2;
+        var pairP = new int[pairCount];
+        var pairQ = new int[pairCount];
+        for (int p = 0, at = 0; p < k1; p++)
+            for (int q = 0; q < (half ? p + 1 : k2); q++, at++)
+            {
+                pairP[at] = p;
+                pairQ[at] = q;
+            }
+        var x2 = new double[(long)pairCount * n2];
         Parallel.For(0, k1, new ParallelOptions { CancellationToken = cancellationToken }, p =>
-            LinearAlgebra.TransposedProduct.Multiply(c2t, x1, x2, k2, (int)n2, n, parallel: false, bOffset: p * n3, cOffset: p * k2 * n2));
+        {
+            long firstPair = half ? (long)p * (p + 1) / 2 : (long)p * k2;
+            LinearAlgebra.TransposedProduct.Multiply(c2t, x1, x2, half ? p + 1 : k2, (int)n2, n, parallel: false, bOffset: p * n3,
+                cOffset: firstPair * n2);
+        });
         // X1 is done with; when the result has its size (all orbitals), its pages are reused instead of fresh ones,
         // which on a virtual machine cost more to fault in than the arithmetic that fills them.
         long resultLength = (long)k1 * k2 * k3 * k4;
@@ -275,13 +291,17 @@ public static class MolecularIntegralTransformation
         //                                                                       O(k₁ k₂ k₄ N² + k₁ k₂ k₃ k₄ N)
         var c3t = Transposed(c3, n, k3);
         var c4t = Transposed(c4, n, k4);
-        Parallel.For(0, k1 * k2, new ParallelOptions { CancellationToken = cancellationToken },
-            () => (Z: new double[n * k4], Zt: new double[k4 * n]), (pq, _, buffers) =>
+        int block = k3 * k4;
+        Parallel.For(0, pairCount, new ParallelOptions { CancellationToken = cancellationToken },
+            () => (Z: new double[n * k4], Zt: new double[k4 * n]), (pair, _, buffers) =>
             {
-                LinearAlgebra.TransposedProduct.Multiply(x2, c4t, buffers.Z, n, k4, n, parallel: false, aOffset: pq * n2);
+                int p = pairP[pair], q = pairQ[pair];
+                LinearAlgebra.TransposedProduct.Multiply(x2, c4t, buffers.Z, n, k4, n, parallel: false, aOffset: pair * n2);
                 for (int la = 0; la < n; la++)
                     for (int sIndex = 0; sIndex < k4; sIndex++) buffers.Zt[sIndex * n + la] = buffers.Z[la * k4 + sIndex];
-                LinearAlgebra.TransposedProduct.Multiply(c3t, buffers.Zt, result, k3, k4, n, parallel: false, cOffset: (long)pq * k3 * k4);
+                long target = ((long)p * k2 + q) * block;
+                LinearAlgebra.TransposedProduct.Multiply(c3t, buffers.Zt, result, k3, k4, n, parallel: false, cOffset: target);
+                if (half && p != q) Array.Copy(result, target, result, ((long)q * k2 + p) * block, block);
                 return buffers;
             }, _ => { });
         return result;

@@ -19,9 +19,9 @@ internal sealed class CorrelationCalcMethod(string name, string description) : I
     public static readonly Option<string?> ReferenceOption = new("--reference")
     { Description = "Reference of a correlated method: rhf or uhf (default: rhf for a singlet, uhf otherwise)." };
 
-    /// <summary><c>--frozen-core N</c>: core orbitals per spin left uncorrelated.</summary>
-    public static readonly Option<int> FrozenCoreOption = new("--frozen-core")
-    { Description = "Core orbitals per spin left uncorrelated by a correlated method (default 0: all electrons)." };
+    /// <summary><c>--frozen-core N|auto</c>: core orbitals per spin left uncorrelated.</summary>
+    public static readonly Option<string?> FrozenCoreOption = new("--frozen-core")
+    { Description = "Core orbitals per spin left uncorrelated by a correlated method: a number, or auto for the noble-gas cores of the atoms (water 1, benzene 6). Default 0: all electrons." };
 
     /// <summary><c>--states N</c>: excited states (CIS, RPA) or roots (FCI).</summary>
     public static readonly Option<int?> StatesOption = new("--states")
@@ -61,7 +61,12 @@ internal sealed class CorrelationCalcMethod(string name, string description) : I
         if (reference == ScfReference.Restricted && molecule.Multiplicity != 1)
             throw new OrbitariumInputException(
                 $"{label} with an RHF reference needs a closed shell, but the molecule has multiplicity {molecule.Multiplicity}: use --reference uhf (the default for open shells).");
-        var options = CorrelationOptions.Default.WithFrozenCore(parse.GetValue(FrozenCoreOption));
+        string frozen = parse.GetValue(FrozenCoreOption)?.Trim().ToLowerInvariant() ?? "0";
+        var options = frozen == "auto"
+            ? CorrelationOptions.Default.WithStandardFrozenCore(molecule)
+            : int.TryParse(frozen, NumberStyles.Integer, CultureInfo.InvariantCulture, out int count)
+                ? CorrelationOptions.Default.WithFrozenCore(count)
+                : throw new OrbitariumInputException($"--frozen-core takes a number of orbitals or auto, got '{frozen}'.");
         int? states = parse.GetValue(StatesOption);
         if (states is < 1)
             throw new OrbitariumInputException($"--states must be at least 1, got {states}.");

@@ -37,6 +37,22 @@ public sealed class Element : IEquatable<Element>
     /// <summary>Single-bond covalent radius in ångström, used to perceive bonds.</summary>
     public double CovalentRadiusAngstrom { get; }
 
+    /// <summary>
+    /// Orbitals of the preceding noble-gas shell, the ones a frozen-core correlated calculation leaves uncorrelated
+    /// by common practice: 0 for H–He, 1 ([He]) for Li–Ne, 5 ([Ne]) for Na–Ar, 9 ([Ar]) for K–Kr, 18 ([Kr]) for
+    /// Rb–Xe, 27 ([Xe]) for Cs–Rn.
+    /// </summary>
+    public int NobleGasCoreOrbitals => AtomicNumber switch
+    {
+        <= 2 => 0,
+        <= 10 => 1,
+        <= 18 => 5,
+        <= 36 => 9,
+        <= 54 => 18,
+        <= 86 => 27,
+        _ => 43,
+    };
+
     /// <summary>Looks an element up by symbol (case-insensitive); see <see cref="PeriodicTable.BySymbol"/>.</summary>
     public static Element FromSymbol(string symbol) => PeriodicTable.BySymbol(symbol);
 

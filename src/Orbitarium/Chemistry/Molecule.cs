@@ -67,6 +67,21 @@ public sealed class Molecule
     /// <summary>Number of electrons: sum of nuclear charges minus the total charge.</summary>
     public int ElectronCount => NuclearChargeSum - Charge;
 
+    /// <summary>
+    /// The usual frozen-core count for correlated methods: the noble-gas core orbitals of every atom
+    /// (<see cref="Element.NobleGasCoreOrbitals"/>; water 1, benzene 6, SiH₄ 5). A system with no electron outside
+    /// those cores (Li⁺, Be²⁺) gets 0, so its electrons are correlated rather than all frozen.
+    /// </summary>
+    public int StandardFrozenCoreOrbitals
+    {
+        get
+        {
+            int core = 0;
+            foreach (var a in Atoms) core += a.Element.NobleGasCoreOrbitals;
+            return core >= AlphaElectronCount ? 0 : Math.Min(core, BetaElectronCount);
+        }
+    }
+
     /// <summary>Number of α electrons, (N + 2S)/2.</summary>
     public int AlphaElectronCount => (ElectronCount + Multiplicity - 1) / 2;
 

@@ -33,6 +33,14 @@ public sealed record CorrelationOptions
         ? throw new OrbitariumInputException($"The frozen-core count must be 0 or more, got {count}.")
         : this with { FrozenCoreOrbitals = count };
 
+    /// <summary>Returns options freezing the noble-gas cores of <paramref name="molecule"/>
+    /// (<see cref="Chemistry.Molecule.StandardFrozenCoreOrbitals"/>: water 1, benzene 6).</summary>
+    public CorrelationOptions WithStandardFrozenCore(Chemistry.Molecule molecule)
+    {
+        ArgumentNullException.ThrowIfNull(molecule);
+        return this with { FrozenCoreOrbitals = molecule.StandardFrozenCoreOrbitals };
+    }
+
     /// <summary>Returns options with new convergence thresholds (energy in hartree, residual dimensionless).</summary>
     public CorrelationOptions WithThresholds(double energyHartree, double residual) => energyHartree <= 0 || residual <= 0
         ? throw new OrbitariumInputException($"Convergence thresholds must be positive, got energy {energyHartree} Eh and residual {residual}.")

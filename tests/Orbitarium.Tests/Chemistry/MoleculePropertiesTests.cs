@@ -82,4 +82,27 @@ public class MoleculePropertiesTests
         Assert.Equal(1, one.AtomCount);
         Assert.Equal(2, two.AtomCount);
     }
+
+    [Theory]
+    [InlineData("tg1-water.xyz", 1)]
+    [InlineData("tgb-benzene.xyz", 6)]
+    [InlineData("tg7-dihydrogen.xyz", 0)]
+    public void The_standard_frozen_core_counts_the_noble_gas_cores(string file, int expected)
+    {
+        // Common practice: one 1s orbital per first-row atom, none for hydrogen.
+        var molecule = Molecule.FromXyzFile(Path.Combine(Orbitarium.Tests.Shell.Repl.TestConsoles.RepositoryRoot(), "examples", file));
+        Assert.Equal(expected, molecule.StandardFrozenCoreOrbitals);
+    }
+
+    [Fact]
+    public void The_standard_frozen_core_of_second_row_atoms_is_the_neon_shell_and_never_freezes_every_electron()
+    {
+        var silane = Molecule.Empty.AddAtom("Si", 0, 0, 0).AddAtom("H", 0.855, 0.855, 0.855).AddAtom("H", -0.855, -0.855, 0.855)
+            .AddAtom("H", -0.855, 0.855, -0.855).AddAtom("H", 0.855, -0.855, -0.855);
+        Assert.Equal(5, silane.StandardFrozenCoreOrbitals);
+        // Li⁺ is all core: its two electrons are correlated rather than both frozen. The Li atom keeps 1s frozen.
+        Assert.Equal(0, Molecule.Empty.AddAtom("Li", 0, 0, 0).WithCharge(1).StandardFrozenCoreOrbitals);
+        Assert.Equal(1, Molecule.Empty.AddAtom("Li", 0, 0, 0).StandardFrozenCoreOrbitals);
+        Assert.Equal(9, Element.FromSymbol("Br").NobleGasCoreOrbitals);
+    }
 }

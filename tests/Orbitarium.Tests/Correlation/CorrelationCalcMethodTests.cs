@@ -34,6 +34,24 @@ public class CorrelationCalcMethodTests
     }
 
     [Fact]
+    public void Frozen_core_auto_freezes_the_oxygen_1s_and_a_bad_value_is_named()
+    {
+        // Common practice: the noble-gas core of each atom (O: [He], one orbital) is frozen.
+        var (code, text, err) = Calc("-g", WaterFile, "-b", "6-31G", "-m", "mp2", "--frozen-core", "auto", "--json");
+        Assert.True(code == 0, err);
+        using var auto = JsonDocument.Parse(text);
+        Assert.Equal(1, auto.RootElement.GetProperty("frozen_core").GetInt32());
+        (code, text, err) = Calc("-g", WaterFile, "-b", "6-31G", "-m", "mp2", "--frozen-core", "1", "--json");
+        using var one = JsonDocument.Parse(text);
+        Assert.Equal(one.RootElement.GetProperty("correlation_energy").GetDouble(), auto.RootElement.GetProperty("correlation_energy").GetDouble(), 1e-12);
+
+        (code, _, err) = Calc("-g", WaterFile, "-b", "6-31G", "-m", "mp2", "--frozen-core", "most");
+        Assert.NotEqual(0, code);
+        Assert.Contains("--frozen-core takes a number of orbitals or auto", err);
+        Assert.DoesNotContain("   at ", err);
+    }
+
+    [Fact]
     public void Fci_and_cis_json_list_excitation_energies_and_oscillator_strengths()
     {
         string path = Path.Combine(Path.GetTempPath(), $"orbitarium-h2-{Guid.NewGuid():N}.xyz");

@@ -249,7 +249,9 @@ public static class MolecularIntegralTransformation
         // As products C1ᵀ·AO over chunks of the flat index λσν (ν fastest, the index quarter 2 sums over), so each
         // AO column is read once and X1 written once.
         var c1t = Transposed(c1, n, k1);
-        var x1 = new double[k1 * n3];
+        // Every element of X1, X2 and the result is written by a product that starts from zero, so the arrays need
+        // no clearing on allocation.
+        var x1 = GC.AllocateUninitializedArray<double>((int)(k1 * n3));
         const int chunk = 512;
         long chunks = (n3 + chunk - 1) / chunk;
         Parallel.For(0L, chunks, new ParallelOptions { CancellationToken = cancellationToken },
@@ -275,7 +277,7 @@ public static class MolecularIntegralTransformation
                 pairP[at] = p;
                 pairQ[at] = q;
             }
-        var x2 = new double[(long)pairCount * n2];
+        var x2 = GC.AllocateUninitializedArray<double>((int)(pairCount * n2));
         Parallel.For(0, k1, new ParallelOptions { CancellationToken = cancellationToken }, p =>
         {
             long firstPair = half ? (long)p * (p + 1) / 2 : (long)p * k2;
@@ -285,7 +287,7 @@ public static class MolecularIntegralTransformation
         // X1 is done with; when the result has its size (all orbitals), its pages are reused instead of fresh ones,
         // which on a virtual machine cost more to fault in than the arithmetic that fills them.
         long resultLength = (long)k1 * k2 * k3 * k4;
-        var result = resultLength == x1.LongLength ? x1 : new double[resultLength];
+        var result = resultLength == x1.LongLength ? x1 : GC.AllocateUninitializedArray<double>((int)resultLength);
         x1 = null!;
         // Quarter 4 then 3, per pq: Z[λ, s] = Σ_σ X2[pq, λσ] C4[σ,s];  (pq|rs) = Σ_λ C3[λ,r] Z[λ, s]
         //                                                                       O(k₁ k₂ k₄ N² + k₁ k₂ k₃ k₄ N)

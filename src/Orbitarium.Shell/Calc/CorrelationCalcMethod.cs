@@ -7,7 +7,8 @@ using Orbitarium.Scf;
 namespace Orbitarium.Shell.Calc;
 
 /// <summary>
-/// The correlated methods of <c>calc</c>: <c>mp2</c>, <c>ccsd</c>, <c>ccsd(t)</c>, <c>cis</c>, <c>rpa</c>, <c>fci</c>.
+/// The correlated methods of <c>calc</c>: <c>mp2</c>, <c>ccsd</c>, <c>ccsd(t)</c>, <c>cis</c>, <c>rpa</c>,
+/// <c>eom-ccsd</c>, <c>fci</c>.
 /// The Hartree–Fock reference is RHF for a singlet and UHF otherwise unless <c>--reference</c> says which; all electrons
 /// are correlated unless <c>--frozen-core N</c>. JSON keys: <c>reference_energy</c>, <c>correlation_energy</c>,
 /// <c>total_energy</c> (hartree), and for CIS, RPA and FCI <c>excitation_energies</c> (hartree) and
@@ -25,7 +26,7 @@ internal sealed class CorrelationCalcMethod(string name, string description) : I
 
     /// <summary><c>--states N</c>: excited states (CIS, RPA) or roots (FCI).</summary>
     public static readonly Option<int?> StatesOption = new("--states")
-    { Description = "Excited states for cis/rpa (default 5) or roots including the ground state for fci (default 3)." };
+    { Description = "Excited states for cis/rpa/eom-ccsd (default 5) or roots including the ground state for fci (default 3)." };
 
     /// <summary>The methods this class provides, for <see cref="CalcMethods.All"/>.</summary>
     public static IEnumerable<ICalcMethod> All =>
@@ -35,6 +36,7 @@ internal sealed class CorrelationCalcMethod(string name, string description) : I
         new CorrelationCalcMethod("ccsd(t)", "CCSD with perturbative triples on RHF or UHF"),
         new CorrelationCalcMethod("cis", "configuration interaction singles excited states"),
         new CorrelationCalcMethod("rpa", "random-phase approximation (TDHF) excited states"),
+        new CorrelationCalcMethod("eom-ccsd", "EOM-CCSD singlet excited states of a closed-shell RHF reference"),
         new CorrelationCalcMethod("fci", "full configuration interaction (small systems)"),
     ];
 
@@ -129,6 +131,18 @@ internal sealed class CorrelationCalcMethod(string name, string description) : I
                 json.Add(new("oscillator_strengths", Array(r.OscillatorStrengths)));
                 for (int k = 0; k < r.ExcitationEnergiesHartree.Length; k++)
                     lines.Add(string.Create(c, $"  {r.Manifold} {k + 1,-3} {r.ExcitationEnergiesHartree[k],14:F8} Eh {r.ExcitationEnergiesElectronVolt[k],10:F4} eV   f = {r.OscillatorStrengths[k]:F5}"));
+                break;
+            }
+            case "eom-ccsd":
+            {
+                int n = states ?? 5;
+                var r = request.Timings.Measure("correlation", () => scf.EomCcsd(n, options, null, cancellationToken));
+                // The ground state is CCSD: its energy is the reference of the excitation energies.
+                Energies(scf.TotalEnergyHartree, r.ReferenceEnergyHartree - scf.TotalEnergyHartree, r.ReferenceEnergyHartree);
+                json.Add(new("manifold", r.Manifold));
+                json.Add(new("excitation_energies", Array(r.ExcitationEnergiesHartree)));
+                for (int k = 0; k < r.ExcitationEnergiesHartree.Length; k++)
+                    lines.Add(string.Create(c, $"  {r.Manifold} {k + 1,-3} {r.ExcitationEnergiesHartree[k],14:F8} Eh {r.ExcitationEnergiesElectronVolt[k],10:F4} eV"));
                 break;
             }
             default:

@@ -243,6 +243,71 @@ internal sealed class ClosedShellCcsdSolver
         return new CcsdAmplitudeSolver.Outcome(energy, mp2, iteration, converged, reason, energies, residuals, t1Diagnostic);
     }
 
+    /// <summary>
+    /// The CCSD Jacobian A = ∂Ω/∂t at the current amplitudes applied to <paramref name="x"/> (singles then doubles,
+    /// doubles with x_ij^ab = x_ji^ba), written to <paramref name="sigma"/>.
+    /// </summary>
+    /// <remarks>
+    /// Ω is a polynomial of degree at most five along any line t + s·x (t1 enters the dressed integrals at most four
+    /// times, t2 at most twice, and no term has more than five amplitudes), so the six-point central stencil
+    /// dΩ/ds = [45(Ω₁ − Ω₋₁) − 9(Ω₂ − Ω₋₂) + (Ω₃ − Ω₋₃)] / (60 h), Ω_k = Ω(t + k h x), is exact for it: the product is
+    /// exact up to round-off whatever the step. The step is chosen so the displaced amplitudes stay of the size of
+    /// the amplitudes themselves. The amplitudes and the dressing are restored on return.
+    /// </remarks>
+    public void JacobianTimes(double[] x, double[] sigma, CancellationToken ct)
+    {
+        int n1 = _o * _v, n2 = T2.Length;
+        var t1 = (double[])T1.Clone();
+        var t2 = (double[])T2.Clone();
+        double norm = 0;
+        foreach (var value in x) norm = Math.Max(norm, Math.Abs(value));
+        Array.Clear(sigma);
+        if (norm == 0) return;
+        double h = 0.01 / norm;
+        ReadOnlySpan<double> weights = [45.0, -9.0, 1.0];
+        var shifted1 = new double[n1];
+        var shifted2 = new double[n2];
+        try
+        {
+            for (int step = 1; step <= 3; step++)
+                for (int sign = -1; sign <= 1; sign += 2)
+                {
+                    ct.ThrowIfCancellationRequested();
+                    double s = sign * step * h;
+                    for (int i = 0; i < n1; i++) shifted1[i] = t1[i] + s * x[i];
+                    for (int i = 0; i < n2; i++) shifted2[i] = t2[i] + s * x[n1 + i];
+                    T1 = shifted1;
+                    T2 = shifted2;
+                    Dress(shifted1);
+                    var (r1, r2) = Residual(ct);
+                    double c = sign * weights[step - 1] / (60 * h);
+                    for (int i = 0; i < n1; i++) sigma[i] += c * r1[i];
+                    for (int i = 0; i < n2; i++) sigma[n1 + i] += c * r2[i];
+                }
+        }
+        finally
+        {
+            T1 = t1;
+            T2 = t2;
+        }
+    }
+
+    /// <summary>Orbital-energy differences ε_a − ε_i (singles) and ε_a + ε_b − ε_i − ε_j (doubles): the diagonal the
+    /// Jacobian is preconditioned with.</summary>
+    public double[] OrbitalEnergyDifferences()
+    {
+        int o = _o, v = _v;
+        var d = new double[o * v + T2.Length];
+        for (int i = 0; i < o; i++)
+            for (int a = 0; a < v; a++) d[i * v + a] = OrbitalEnergy(o + a) - OrbitalEnergy(i);
+        for (int i = 0; i < o; i++)
+            for (int j = 0; j < o; j++)
+                for (int a = 0; a < v; a++)
+                    for (int b = 0; b < v; b++)
+                        d[o * v + ((i * o + j) * v + a) * v + b] = d[i * v + a] + d[j * v + b];
+        return d;
+    }
+
     /// <summary>E = 2 Σ f_ia t_i^a + Σ [2(ia|jb) − (ib|ja)] (t_ij^ab + t_i^a t_j^b).</summary>
     private double Energy(double[] t1, double[] t2)
     {

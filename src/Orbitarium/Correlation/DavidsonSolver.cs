@@ -31,6 +31,40 @@ public static class DavidsonSolver
             throw new OrbitariumInputException($"The diagonal has {diagonal.Length} entries for dimension {dimension}.");
         var diag = diagonal.ToArray();
         if (dimension <= 64) return Dense(dimension, multiply, roots);
+        return Iterate(dimension, diag, multiply, roots, options, progress, cancellationToken, method, symmetric: true, project: null);
+    }
+
+    /// <summary>
+    /// Finds the eigenpairs of lowest real part of a large non-symmetric matrix (a coupled-cluster Jacobian, say),
+    /// with right eigenvectors. Eigenvalues that come out complex in the subspace are reported by their real part.
+    /// </summary>
+    /// <param name="dimension">Matrix dimension.</param>
+    /// <param name="diagonal">The matrix diagonal (length <paramref name="dimension"/>).</param>
+    /// <param name="multiply">Computes σ = A·c into its second argument (zeroed on entry).</param>
+    /// <param name="roots">Number of eigenpairs wanted.</param>
+    /// <param name="project">Applied to every new correction vector, to keep the search inside a subspace (for
+    /// example the vectors that respect a symmetry of the parameters); null for none.</param>
+    /// <param name="options">Residual threshold (on the residual norm), energy threshold, iteration limit.</param>
+    /// <param name="progress">Receives (iteration, lowest eigenvalue, largest residual norm).</param>
+    /// <param name="cancellationToken">Stops the iterations.</param>
+    /// <param name="method">Name shown in progress reports.</param>
+    public static DavidsonResult SolveNonSymmetric(int dimension, ReadOnlySpan<double> diagonal, Action<double[], double[]> multiply,
+        int roots, Action<double[]>? project = null, CorrelationOptions? options = null, IProgress<CorrelationProgress>? progress = null,
+        CancellationToken cancellationToken = default, string method = "Davidson")
+    {
+        ArgumentNullException.ThrowIfNull(multiply);
+        options ??= CorrelationOptions.Default;
+        if (roots < 1 || roots > dimension)
+            throw new OrbitariumInputException($"Asked for {roots} roots of a {dimension}-dimensional problem: ask for between 1 and {dimension}.");
+        if (diagonal.Length != dimension)
+            throw new OrbitariumInputException($"The diagonal has {diagonal.Length} entries for dimension {dimension}.");
+        return Iterate(dimension, diagonal.ToArray(), multiply, roots, options, progress, cancellationToken, method, symmetric: false, project);
+    }
+
+    private static DavidsonResult Iterate(int dimension, double[] diag, Action<double[], double[]> multiply, int roots,
+        CorrelationOptions options, IProgress<CorrelationProgress>? progress, CancellationToken cancellationToken, string method,
+        bool symmetric, Action<double[]>? project)
+    {
 
         int maxSubspace = Math.Max(8 * roots, 24);
         var basis = new List<double[]>();
@@ -41,6 +75,7 @@ public static class DavidsonSolver
         {
             var c = new double[dimension];
             c[order[g]] = 1;
+            project?.Invoke(c);
             AddVector(c);
         }
         var eigen = new double[roots];
@@ -59,25 +94,32 @@ public static class DavidsonSolver
             int k = basis.Count;
             var small = Matrix<double>.Build.Dense(k, k);
             for (int i = 0; i < k; i++)
-                for (int j = 0; j <= i; j++)
-                {
-                    double h = MolecularIntegralTransformation.Dot(basis[i], sigmas[j]);
-                    small[i, j] = h;
-                    small[j, i] = h;
-                }
-            var evd = small.Evd(Symmetricity.Symmetric);
+                for (int j = 0; j < k; j++)
+                    if (!symmetric || j <= i)
+                    {
+                        double h = MolecularIntegralTransformation.Dot(basis[i], sigmas[j]);
+                        small[i, j] = h;
+                        if (symmetric) small[j, i] = h;
+                    }
+            var evd = small.Evd(symmetric ? Symmetricity.Symmetric : Symmetricity.Asymmetric);
+            // The symmetric solver returns ascending eigenvalues; the general one does not, so order by real part.
+            var rank = Enumerable.Range(0, k).OrderBy(i => evd.EigenValues[i].Real).ToArray();
             ritz = new double[roots][];
             var newVectors = new List<double[]>();
             double maxResidual = 0;
             for (int r = 0; r < roots; r++)
             {
-                double theta = evd.EigenValues[r].Real;
+                int column = rank[r];
+                double theta = evd.EigenValues[column].Real;
                 eigen[r] = theta;
                 var x = new double[dimension];
                 var res = new double[dimension];
+                double length = 0;
+                for (int i = 0; i < k; i++) length += evd.EigenVectors[i, column] * evd.EigenVectors[i, column];
+                length = Math.Sqrt(length);
                 for (int i = 0; i < k; i++)
                 {
-                    double y = evd.EigenVectors[i, r];
+                    double y = evd.EigenVectors[i, column] / length;
                     MolecularIntegralTransformation.Axpy(y, basis[i], x);
                     MolecularIntegralTransformation.Axpy(y, sigmas[i], res);
                 }
@@ -93,6 +135,7 @@ public static class DavidsonSolver
                         double den = theta - diag[i];
                         res[i] /= Math.Abs(den) < 1e-4 ? (den < 0 ? -1e-4 : 1e-4) : den;
                     }
+                    project?.Invoke(res);
                     newVectors.Add(res);
                 }
             }

@@ -121,6 +121,23 @@ public static class ScfResultCorrelationExtensions
         return Correlation.Ccsd.ComputeOnPrivateHamiltonian(Hamiltonian(scf, options, "CCSD(T)", cancellationToken), true, options, progress, cancellationToken);
     }
 
+    /// <summary>EOM-CCSD singlet excitation energies of a closed-shell RHF result (see <see cref="Correlation.EomCcsd"/>).</summary>
+    /// <param name="scf">A converged closed-shell RHF result.</param>
+    /// <param name="states">Number of excited states (default 5).</param>
+    /// <param name="options">Thresholds, iterations, frozen core, memory budget.</param>
+    /// <param name="progress">Receives the CCSD iterations, then the eigenvalue iterations.</param>
+    /// <param name="cancellationToken">Stops the calculation.</param>
+    public static ExcitedStatesResult EomCcsd(this ScfResult scf, int states = 5, CorrelationOptions? options = null,
+        IProgress<CorrelationProgress>? progress = null, CancellationToken cancellationToken = default)
+    {
+        ArgumentNullException.ThrowIfNull(scf);
+        if (scf.Reference != ScfReference.Restricted || scf.AlphaElectronCount != scf.BetaElectronCount)
+            throw new OrbitariumInputException(
+                $"EOM-CCSD here computes singlet states of a closed-shell RHF reference, but this is {scf.MethodName} with {scf.AlphaElectronCount} α and {scf.BetaElectronCount} β electrons: run RunRhf on a closed-shell molecule.");
+        return Correlation.EomCcsd.Run(Hamiltonian(scf, options, "CCSD", cancellationToken), states, options, progress, cancellationToken,
+            privateHamiltonian: true);
+    }
+
     /// <summary>CIS excited states: singlets of an RHF result (<paramref name="triplets"/> false) or triplets, or the
     /// unrestricted manifold of a UHF result.</summary>
     /// <param name="scf">A converged RHF or UHF result.</param>

@@ -63,6 +63,14 @@ public class CorrelationCalcMethodTests
             using var fci = JsonDocument.Parse(text);
             Assert.Equal(3, fci.RootElement.GetProperty("excitation_energies").GetArrayLength());
             Assert.Equal(3, fci.RootElement.GetProperty("oscillator_strengths").GetArrayLength());
+            (code, text, err) = Calc("-g", path, "-b", "6-31G**", "-m", "eom-ccsd", "--states", "3", "--json");
+            Assert.True(code == 0, err);
+            using var eom = JsonDocument.Parse(text);
+            // For two electrons EOM-CCSD singlets are FCI singlets (common practice): the lowest FCI excitation
+            // above is a triplet, so it is not among them, but the lowest singlet is.
+            var eomEnergies = eom.RootElement.GetProperty("excitation_energies");
+            Assert.Equal(3, eomEnergies.GetArrayLength());
+            Assert.Contains(fci.RootElement.GetProperty("excitation_energies").EnumerateArray(), e => Math.Abs(e.GetDouble() - eomEnergies[0].GetDouble()) < 1e-6);
             (code, text, err) = Calc("-g", path, "-b", "6-31G**", "-m", "cis", "--states", "2", "--json");
             Assert.True(code == 0, err);
             using var cis = JsonDocument.Parse(text);

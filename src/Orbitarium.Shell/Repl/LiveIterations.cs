@@ -123,7 +123,7 @@ internal sealed class LiveIterations : IProgress<ScfIteration>, IProgress<Correl
             previous = row;
         }
         table.Caption(new TableTitle(
-            "SCF: total energy, residual |FDS−SDF|. Correlated methods: correlation energy, RMS amplitude change. Ctrl+C cancels",
+            "SCF: total energy, residual |FDS−SDF|. CCSD: correlation energy, RMS amplitude change. Eigenvalue solvers (EOM, CI): lowest root, largest residual. Ctrl+C cancels",
             new Style(Color.Grey)));
     }
 

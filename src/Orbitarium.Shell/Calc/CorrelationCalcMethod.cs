@@ -88,7 +88,8 @@ internal sealed class CorrelationCalcMethod(string name, string description) : I
             json.Add(new("reference_energy", referenceEnergy));
             json.Add(new("correlation_energy", correlation));
             json.Add(new("frozen_core", options.FrozenCoreOrbitals));
-            lines.Add(string.Create(c, $"{label} correlation {correlation,20:F10}"));
+            string what = name == "eom-ccsd" ? "CCSD correlation" : $"{label} correlation";
+            lines.Add(string.Create(c, $"{what} {correlation,20:F10}"));
             total = totalEnergy;
         }
         static JsonArray Array(IEnumerable<double> values) => new([.. values.Select(v => (JsonNode?)JsonValue.Create(v))]);

@@ -89,7 +89,7 @@ internal sealed class CorrelationCalcMethod(string name, string description) : I
             json.Add(new("correlation_energy", correlation));
             json.Add(new("frozen_core", options.FrozenCoreOrbitals));
             string what = name == "eom-ccsd" ? "CCSD correlation" : $"{label} correlation";
-            lines.Add(string.Create(c, $"{what} {correlation,20:F10}"));
+            lines.Add(string.Create(c, $"{what,-21}{correlation,20:F10}"));
             total = totalEnergy;
         }
         static JsonArray Array(IEnumerable<double> values) => new([.. values.Select(v => (JsonNode?)JsonValue.Create(v))]);

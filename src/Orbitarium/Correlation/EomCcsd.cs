@@ -37,7 +37,9 @@ public static class EomCcsd
             throw new OrbitariumInputException($"Ask for at least one excited state, got {states}.");
         int nf = Mp2.CheckFrozenCore(options.FrozenCoreOrbitals, hamiltonian.AlphaOccupiedCount, hamiltonian.BetaOccupiedCount);
         int m = hamiltonian.OrbitalCount - nf, o = hamiltonian.AlphaOccupiedCount - nf, v = m - o;
-        double work = ClosedShellCcsdSolver.WorkingDoubles(m, o, options.DiisVectors) + (8.0 * states + 24) * (o * (double)v + (double)o * o * v * v);
+        // The Davidson subspace keeps up to max(8·states, 24) vectors and as many products, plus a few work vectors.
+        double work = ClosedShellCcsdSolver.WorkingDoubles(m, o, options.DiisVectors)
+            + (2.0 * Math.Max(8 * states, 24) + 6) * (o * (double)v + (double)o * o * v * v);
         MemoryEstimate.Require("EOM-CCSD", (privateHamiltonian ? 0 : Math.Pow(hamiltonian.OrbitalCount, 4)) + work, options,
             "use a smaller basis, freeze core orbitals (WithFrozenCore), ask for fewer states, or raise the budget (WithMemoryBudgetMebibytes).");
         int dimension = o * v + o * o * v * v;

@@ -21,11 +21,9 @@ namespace Orbitarium.Correlation;
 internal sealed class ClosedShellCcsdSolver
 {
     private readonly int _m, _o, _v;
-    private readonly int _stride, _frozen;
+    private readonly T1DressedIntegrals _integrals;
     private readonly double[] _g;
-    private readonly double[] _frozenCoreOperator;
     private readonly double[] _referenceFock;
-    private readonly double[] _dressedWith;
     // Blocks of (ia|jb), which the dressing leaves alone, in the layouts the contractions read.
     private readonly double[] _ovovByOccupiedPair;   // [(k,l)][(c,d)] = (kc|ld)
     private readonly double[] _coulombOvov;          // [(k,c)][(l,d)] = (kc|ld)
@@ -61,8 +59,6 @@ internal sealed class ClosedShellCcsdSolver
     public ClosedShellCcsdSolver(MolecularOrbitalHamiltonian hamiltonian, int frozenCore, bool dressInPlace, CancellationToken ct)
     {
         int full = hamiltonian.OrbitalCount;
-        _stride = full;
-        _frozen = frozenCore;
         _m = full - frozenCore;
         _o = hamiltonian.AlphaOccupiedCount - frozenCore;
         _v = _m - _o;
@@ -71,17 +67,9 @@ internal sealed class ClosedShellCcsdSolver
         ct.ThrowIfCancellationRequested();
         var fock = hamiltonian.FockMatrix(beta: false);
         _referenceFock = new double[m * m];
-        _frozenCoreOperator = new double[m * m];
         for (int p = 0; p < m; p++)
-            for (int q = 0; q < m; q++)
-            {
-                double f = fock[(p + frozenCore) * full + q + frozenCore];
-                _referenceFock[p * m + q] = f;
-                double active = 0;
-                for (int k = 0; k < o; k++) active += 2 * G(p, q, k, k) - G(p, k, k, q);
-                _frozenCoreOperator[p * m + q] = f - active;
-            }
-        _dressedWith = new double[o * v];
+            for (int q = 0; q < m; q++) _referenceFock[p * m + q] = fock[(p + frozenCore) * full + q + frozenCore];
+        _integrals = new T1DressedIntegrals(_g, full, frozenCore, o, _referenceFock);
         _amplitudesA = (new double[o * v], new double[o * o * v * v]);
         _amplitudesB = (new double[o * v], new double[o * o * v * v]);
         T1 = _amplitudesA.T1;
@@ -137,10 +125,8 @@ internal sealed class ClosedShellCcsdSolver
         return (2.0 * diis + 20) * ovov + 4.0 * v * v * v + o * (double)o * o * o;
     }
 
-    // Active indices (occupied first, then virtual) into the full array, frozen core skipped.
-    private long Index(int p, int q, int r, int s) =>
-        (((long)(p + _frozen) * _stride + q + _frozen) * _stride + r + _frozen) * _stride + s + _frozen;
-    private double G(int p, int q, int r, int s) => _g[Index(p, q, r, s)];
+    private long Index(int p, int q, int r, int s) => _integrals.Index(p, q, r, s);
+    private double G(int p, int q, int r, int s) => _g[_integrals.Index(p, q, r, s)];
 
     public CcsdAmplitudeSolver.Outcome Solve(CorrelationOptions options, IProgress<CorrelationProgress>? progress, CancellationToken ct)
     {
@@ -328,107 +314,9 @@ internal sealed class ClosedShellCcsdSolver
     }
 
     /// <summary>Re-dresses the integrals from the singles they carry to <paramref name="t1"/>, in place.</summary>
-    internal void Dress(double[] t1)
-    {
-        int m = _m, o = _o, v = _v;
-        var delta = new double[o * v];
-        bool any = false;
-        for (int x = 0; x < delta.Length; x++)
-        {
-            delta[x] = t1[x] - _dressedWith[x];
-            any |= delta[x] != 0;
-        }
-        if (!any) return;
-        // The transformations act on the full array (frozen rows and columns are carried along unchanged in
-        // meaning: they are never read with a dressed index by the equations). Each is a product
-        // (TransposedProduct) of Δ with the occupied or virtual rows it reads, which are never the rows it writes.
-        int n = _stride, f = _frozen, occ = f, vir = f + o;
-        long n3 = (long)n * n * n, n2 = (long)n * n;
-        var negDeltaT = new double[v * o];   // [a][k] = −Δ_k^a
-        for (int k = 0; k < o; k++)
-            for (int a = 0; a < v; a++) negDeltaT[a * o + k] = -delta[k * v + a];
-        const int chunk = 2048;
-        // Index 1 (X = 1 − Δᵀ): row a −= Σ_k Δ_k^a row k, over the n³ columns in chunks.
-        long chunks1 = (n3 + chunk - 1) / chunk;
-        Parallel.For(0L, chunks1, () => new double[chunk * o], (ci, _, columns) =>
-        {
-            long start = ci * chunk;
-            int count = (int)Math.Min(chunk, n3 - start);
-            for (int k = 0; k < o; k++)
-            {
-                long row = (occ + k) * n3 + start;
-                for (int t = 0; t < count; t++) columns[t * o + k] = _g[row + t];
-            }
-            TransposedProduct.Multiply(negDeltaT, columns, _g, v, count, o, accumulate: true, parallel: false,
-                cOffset: vir * n3 + start, cRowStride: n3);
-            return columns;
-        }, _ => { });
-        // Index 2 (Y = 1 + Δ): in each block p, row i += Σ_c Δ_i^c row c, over the n² columns in chunks.
-        Parallel.For(0, n, () => new double[chunk * v], (p, _, columns) =>
-        {
-            long block = p * n3;
-            for (long start = 0; start < n2; start += chunk)
-            {
-                int count = (int)Math.Min(chunk, n2 - start);
-                for (int c = 0; c < v; c++)
-                {
-                    long row = block + (vir + c) * n2 + start;
-                    for (int t = 0; t < count; t++) columns[t * v + c] = _g[row + t];
-                }
-                TransposedProduct.Multiply(delta, columns, _g, o, count, v, accumulate: true, parallel: false,
-                    cOffset: block + occ * n2 + start, cRowStride: n2);
-            }
-            return columns;
-        }, _ => { });
-        // Indices 3 and 4, within each (p, q) block of n×n: rows a −= Σ_k Δ_k^a rows k; columns i += Σ_c Δ_i^c columns c.
-        Parallel.For(0, n, () => new double[n * o], (p, _, columns) =>
-        {
-            for (int q = 0; q < n; q++)
-            {
-                long block = p * n3 + q * n2;
-                for (int k = 0; k < o; k++)
-                {
-                    long row = block + (long)(occ + k) * n;
-                    for (int sIndex = 0; sIndex < n; sIndex++) columns[sIndex * o + k] = _g[row + sIndex];
-                }
-                TransposedProduct.Multiply(negDeltaT, columns, _g, v, n, o, accumulate: true, parallel: false,
-                    cOffset: block + (long)vir * n, cRowStride: n);
-                TransposedProduct.Multiply(_g, delta, _g, n, o, v, accumulate: true, parallel: false,
-                    aOffset: block + vir, aRowStride: n, cOffset: block + occ, cRowStride: n);
-            }
-            return columns;
-        }, _ => { });
-        Array.Copy(t1, _dressedWith, t1.Length);
-    }
+    internal void Dress(double[] t1) => _integrals.DressWith(t1);
 
     private static void Axpy(double s, ReadOnlySpan<double> x, Span<double> y) => MolecularIntegralTransformation.Axpy(s, x, y);
-
-    /// <summary>The dressed Fock matrix F̃ = Xᵀ h_fc Y + Σ_k [2 g̃_pqkk − g̃_pkkq] over the active orbitals.</summary>
-    private double[] DressedFock()
-    {
-        int m = _m, o = _o, v = _v;
-        var t1 = _dressedWith;
-        var hy = new double[m * m];
-        for (int t = 0; t < m; t++)
-            for (int q = 0; q < m; q++)
-            {
-                double s = _frozenCoreOperator[t * m + q];
-                if (q < o)
-                    for (int c = 0; c < v; c++) s += _frozenCoreOperator[t * m + o + c] * t1[q * v + c];
-                hy[t * m + q] = s;
-            }
-        var f = new double[m * m];
-        for (int p = 0; p < m; p++)
-            for (int q = 0; q < m; q++)
-            {
-                double s = hy[p * m + q];
-                if (p >= o)
-                    for (int k = 0; k < o; k++) s -= t1[k * v + p - o] * hy[k * m + q];
-                for (int k = 0; k < o; k++) s += 2 * G(p, q, k, k) - G(p, k, k, q);
-                f[p * m + q] = s;
-            }
-        return f;
-    }
 
     /// <summary>The CCSD residuals Ω_ai and Ω_aibj at the current amplitudes (integrals dressed with T1).</summary>
     internal (double[] Singles, double[] Doubles) Residual(CancellationToken ct)
@@ -436,7 +324,7 @@ internal sealed class ClosedShellCcsdSolver
         int m = _m, o = _o, v = _v;
         int ov = o * v, oo = o * o, vv = v * v;
         var t2 = T2;
-        var f = DressedFock();
+        var f = _integrals.Fock();
         // u_ij^ab = 2 t_ij^ab − t_ij^ba
         var u = Work(Slot.U, t2.Length);
         for (int ij = 0; ij < oo; ij++)

@@ -3,7 +3,7 @@
 // nuclear repulsion included, fits a quartic to each curve and reports the equilibrium distance r_e and the
 // harmonic wavenumber ω_e (H-1 and F-19 masses). The closed-shell coupled-cluster code makes each point a fraction
 // of a second. Check (run by the test suite): RHF bonds too short and too stiff, correlation lengthens and softens
-// the bond, and CCSD(T) lands near experiment.
+// the bond, and CCSD(T) lands near experiment. The curves go to plots/tg4-fluoride-stretch.png beside the script.
 //
 //   orbitarium run scripts/tg4-fluoride-stretch-correlated.csx [basis]
 
@@ -59,3 +59,16 @@ foreach (var method in methods)
     double re = (x + centre) * PhysicalConstants.AngstromPerBohr;
     Print(FormattableString.Invariant($"  {method,-8}  r_e = {re:F4}   ω_e = {omega,7:F1}   {eMin:F9}"));
 }
+
+// The four curves, each relative to its own lowest point, so the shift of the minimum and the change of curvature
+// show directly.
+var curves = methods.Select(method =>
+{
+    double lowest = energies[method].Min();
+    return new CurveSeries(method, [.. distancesAngstrom],
+        [.. energies[method].Select(e => (e - lowest) * PhysicalConstants.HartreeToKcalPerMol)]);
+}).ToList();
+Directory.CreateDirectory(PlotFolder);
+var figure = EnergyCurve.Save(curves, Path.Combine(PlotFolder, "tg4-fluoride-stretch.png"), "R(H–F) / Å",
+    "E − E(lowest point) / kcal mol⁻¹", $"TG-4 H–F stretch, {basis}");
+Print($"figure: {figure.Path}");

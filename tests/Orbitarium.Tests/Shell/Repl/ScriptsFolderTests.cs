@@ -85,6 +85,10 @@ public partial class ScriptsFolderTests
                 // practice): here by about 0.02 Å and 7 %.
                 Assert.True(reCc - reHf > 0.01, $"r_e RHF {reHf}, CCSD(T) {reCc}");
                 Assert.True(wHf / wCc > 1.04, $"ω_e RHF {wHf}, CCSD(T) {wCc}");
+                // The figure was written and is a PNG (signature 89 50 4E 47).
+                string figure = Regex.Match(text, @"figure: (.+\.png)").Groups[1].Value.Trim();
+                Assert.True(File.Exists(figure), $"no figure at '{figure}'");
+                Assert.Equal(new byte[] { 0x89, 0x50, 0x4E, 0x47 }, File.ReadAllBytes(figure)[..4]);
                 break;
             }
             case "tg2-hydroxyl-uhf-rohf.csx":

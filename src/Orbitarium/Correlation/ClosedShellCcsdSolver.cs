@@ -234,11 +234,12 @@ internal sealed class ClosedShellCcsdSolver
     /// doubles with x_ij^ab = x_ji^ba), written to <paramref name="sigma"/>.
     /// </summary>
     /// <remarks>
-    /// Ω is a polynomial of degree at most five along any line t + s·x (t1 enters the dressed integrals at most four
-    /// times, t2 at most twice, and no term has more than five amplitudes), so the six-point central stencil
-    /// dΩ/ds = [45(Ω₁ − Ω₋₁) − 9(Ω₂ − Ω₋₂) + (Ω₃ − Ω₋₃)] / (60 h), Ω_k = Ω(t + k h x), is exact for it: the product is
-    /// exact up to round-off whatever the step. The step is chosen so the displaced amplitudes stay of the size of
-    /// the amplitudes themselves. The amplitudes and the dressing are restored on return.
+    /// Ω is a polynomial of degree at most four in the amplitudes (the Hamiltonian has two-body terms only, so the
+    /// Baker–Campbell–Hausdorff expansion of e^{−T} H e^{T} ends at the fourfold commutator), hence along any line
+    /// t + s·x. The four-point central stencil dΩ/ds = [8(Ω₁ − Ω₋₁) − (Ω₂ − Ω₋₂)] / (12 h), Ω_k = Ω(t + k h x), is exact
+    /// for such polynomials, so the product is exact up to round-off whatever the step. The step is chosen so the
+    /// displaced amplitudes stay of the size of the amplitudes themselves. The amplitudes and the dressing are
+    /// restored on return.
     /// </remarks>
     public void JacobianTimes(double[] x, double[] sigma, CancellationToken ct)
     {
@@ -250,12 +251,12 @@ internal sealed class ClosedShellCcsdSolver
         Array.Clear(sigma);
         if (norm == 0) return;
         double h = 0.01 / norm;
-        ReadOnlySpan<double> weights = [45.0, -9.0, 1.0];
+        ReadOnlySpan<double> weights = [8.0, -1.0];
         var shifted1 = new double[n1];
         var shifted2 = new double[n2];
         try
         {
-            for (int step = 1; step <= 3; step++)
+            for (int step = 1; step <= 2; step++)
                 for (int sign = -1; sign <= 1; sign += 2)
                 {
                     ct.ThrowIfCancellationRequested();
@@ -266,7 +267,7 @@ internal sealed class ClosedShellCcsdSolver
                     T2 = shifted2;
                     Dress(shifted1);
                     var (r1, r2) = Residual(ct);
-                    double c = sign * weights[step - 1] / (60 * h);
+                    double c = sign * weights[step - 1] / (12 * h);
                     for (int i = 0; i < n1; i++) sigma[i] += c * r1[i];
                     for (int i = 0; i < n2; i++) sigma[n1 + i] += c * r2[i];
                 }

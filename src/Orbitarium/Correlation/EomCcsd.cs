@@ -8,9 +8,9 @@ namespace Orbitarium.Correlation;
 /// J. F. Stanton and R. J. Bartlett, J. Chem. Phys. 98, 7029 (1993); the eigenvalues equal those of CCSD linear
 /// response (H. Koch and P. Jørgensen, J. Chem. Phys. 93, 3333 (1990)). The Jacobian products come from the
 /// closed-shell CCSD residual along the trial vector (<see cref="ClosedShellCcsdSolver.JacobianTimes"/>: an exact
-/// stencil, since the residual is a polynomial), each costing six CCSD residual evaluations. Because the spin-adapted
-/// residual is the αβ block of the spin-orbital one, the Jacobian restricted to the symmetric amplitudes
-/// x_ij^ab = x_ji^ba is the spin-orbital Jacobian on the singlet space, and its eigenvalues are the singlet
+/// stencil, since the residual is a polynomial of degree four), each costing four CCSD residual evaluations. Because
+/// the spin-adapted residual is the αβ block of the spin-orbital one, the Jacobian restricted to the symmetric
+/// amplitudes x_ij^ab = x_ji^ba is the spin-orbital Jacobian on the singlet space, and its eigenvalues are the singlet
 /// EOM-CCSD excitation energies. Oscillator strengths need the left eigenvectors and are not computed.
 /// </remarks>
 public static class EomCcsd

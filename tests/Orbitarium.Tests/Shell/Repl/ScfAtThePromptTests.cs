@@ -42,7 +42,11 @@ public class ScfAtThePromptTests
         using var ctrlC = new CancellationTokenSource();
         var running = session.SubmitAsync("var result = setup.RunRhf(Progress, Token);", ctrlC.Token);
         await Task.Delay(1500);
-        Assert.False(running.IsCompleted, "the SCF finished before it could be cancelled");
+        if (running.IsCompleted)
+        {
+            var early = await running;
+            Assert.Fail($"the SCF finished before it could be cancelled ({early.Status}: {early.Message}):\n{output}");
+        }
 
         // When Ctrl+C is pressed
         await ctrlC.CancelAsync();

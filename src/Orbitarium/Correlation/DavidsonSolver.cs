@@ -71,13 +71,17 @@ public static class DavidsonSolver
         var sigmas = new List<double[]>();
         var order = Enumerable.Range(0, dimension).OrderBy(i => diag[i]).ToArray();
         int guesses = Math.Min(dimension, Math.Max(roots + 2, 2 * roots));
-        for (int g = 0; g < guesses; g++)
+        // Unit vectors on the lowest diagonal elements; a projection may make two of them the same vector, so take
+        // further ones until there are enough independent guesses.
+        for (int g = 0; g < dimension && basis.Count < guesses; g++)
         {
             var c = new double[dimension];
             c[order[g]] = 1;
             project?.Invoke(c);
             AddVector(c);
         }
+        if (basis.Count < roots)
+            throw new OrbitariumInputException($"Only {basis.Count} independent directions exist for {roots} roots: ask for at most {basis.Count}.");
         var eigen = new double[roots];
         var previous = Enumerable.Repeat(double.PositiveInfinity, roots).ToArray();
         var residualNorms = new double[roots];

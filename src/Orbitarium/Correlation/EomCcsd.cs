@@ -45,7 +45,11 @@ public static class EomCcsd
         int dimension = o * v + o * o * v * v;
         if (o == 0 || v == 0)
             throw new OrbitariumInputException("EOM-CCSD needs occupied and virtual orbitals to excite between; this system has none to excite.");
-        states = Math.Min(states, o * v);
+        // The singlet space: o·v singles and one double per unordered pair of (ia) and (jb).
+        int singletDimension = o * v + o * v * (o * v + 1) / 2;
+        if (states > singletDimension)
+            throw new OrbitariumInputException(
+                $"This system has only {singletDimension} singly and doubly excited singlet configurations; ask for at most {singletDimension} states.");
 
         var solver = new ClosedShellCcsdSolver(hamiltonian, nf, dressInPlace: privateHamiltonian, ct);
         var ground = solver.Solve(options, progress, ct);

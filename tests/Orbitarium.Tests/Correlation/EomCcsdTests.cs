@@ -28,6 +28,22 @@ public class EomCcsdTests
     }
 
     [Fact]
+    public void Finds_every_singlet_of_minimal_basis_H2_and_refuses_more()
+    {
+        // H2/STO-3G has exactly two excited singlets (σ→σ* and the double excitation): both must come out, equal
+        // to full CI (common practice), and a third cannot exist.
+        var rhf = Molecule.Empty.AddAtom("H", 0, 0, 0).AddAtom("H", 0, 0, 0.74).WithBasis("STO-3G").RunRhf();
+        var eom = rhf.EomCcsd(2, Tight);
+        var fci = rhf.Fci(4, Tight);
+        var singlets = Enumerable.Range(1, fci.RootEnergiesHartree.Length - 1).Where(r => Math.Abs(fci.SpinSquared[r]) < 1e-6)
+            .Select(r => fci.RootEnergiesHartree[r] - fci.RootEnergiesHartree[0]).ToArray();
+        Assert.Equal(singlets[0], eom.ExcitationEnergiesHartree[0], 1e-7);
+        Assert.Equal(singlets[1], eom.ExcitationEnergiesHartree[1], 1e-7);
+        var e = Assert.Throws<OrbitariumInputException>(() => rhf.EomCcsd(3));
+        Assert.Contains("at most 2", e.Message);
+    }
+
+    [Fact]
     public void Of_water_in_STO_3G_lies_within_a_few_hundredths_of_an_eV_of_full_CI()
     {
         // EOM-CCSD misses triples; for singly excited valence states its error is typically below 0.1 eV (common

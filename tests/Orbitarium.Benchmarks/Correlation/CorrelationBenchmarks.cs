@@ -63,6 +63,11 @@ public class CorrelationBenchmarks
     [Benchmark(Description = "CCSD(T)")]
     public double CcsdT() => Orbitarium.Correlation.Ccsd.ComputeWithTriples(_hamiltonian).CorrelationEnergyHartree;
 
+    /// <summary>EOM-CCSD, three singlets (CCSD ground state included), with the water's O 1s frozen.</summary>
+    [Benchmark(Description = "EOM-CCSD (3 singlets)")]
+    public double EomCcsd() => Orbitarium.Correlation.EomCcsd.Singlets(_hamiltonian, 3, CorrelationOptions.Default.WithFrozenCore(1))
+        .ExcitationEnergiesHartree[0];
+
     /// <summary>The spin-orbital route on the same closed shell (what UHF references take); cc-pVTZ would need
     /// (2·58)⁴ doubles and minutes, so it reports NaN there instead of running.</summary>
     [Benchmark(Description = "CCSD spin-orbital")]

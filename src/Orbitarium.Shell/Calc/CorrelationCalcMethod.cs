@@ -36,7 +36,7 @@ internal sealed class CorrelationCalcMethod(string name, string description) : I
         new CorrelationCalcMethod("ccsd(t)", "CCSD with perturbative triples on RHF or UHF"),
         new CorrelationCalcMethod("cis", "configuration interaction singles excited states"),
         new CorrelationCalcMethod("rpa", "random-phase approximation (TDHF) excited states"),
-        new CorrelationCalcMethod("eom-ccsd", "EOM-CCSD singlet excited states of a closed-shell RHF reference"),
+        new CorrelationCalcMethod("eom-ccsd", "EOM-CCSD excited states: singlets of an RHF reference, all states of a UHF one"),
         new CorrelationCalcMethod("fci", "full configuration interaction (small systems)"),
     ];
 
@@ -137,7 +137,7 @@ internal sealed class CorrelationCalcMethod(string name, string description) : I
             case "eom-ccsd":
             {
                 int n = states ?? 5;
-                var r = request.Timings.Measure("correlation", () => scf.EomCcsd(n, options, null, cancellationToken));
+                var r = request.Timings.Measure("correlation", () => scf.EomCcsd(n, false, options, null, cancellationToken));
                 // The ground state is CCSD: its energy is the reference of the excitation energies.
                 Energies(scf.TotalEnergyHartree, r.ReferenceEnergyHartree - scf.TotalEnergyHartree, r.ReferenceEnergyHartree);
                 json.Add(new("manifold", r.Manifold));

@@ -70,7 +70,10 @@ public static class DavidsonSolver
         var basis = new List<double[]>();
         var sigmas = new List<double[]>();
         var order = Enumerable.Range(0, dimension).OrderBy(i => diag[i]).ToArray();
-        int guesses = Math.Min(dimension, Math.Max(roots + 2, 2 * roots));
+        // Davidson keeps the symmetry of its start vectors, so a state whose leading configuration is far up the
+        // diagonal is found only if a start vector reaches it. The non-symmetric (coupled-cluster) problems, whose
+        // correlation reorders configurations more, start from more vectors.
+        int guesses = Math.Min(dimension, symmetric ? Math.Max(roots + 2, 2 * roots) : Math.Max(roots + 6, 2 * roots));
         // Unit vectors on the lowest diagonal elements; a projection may make two of them the same vector, so take
         // further ones until there are enough independent guesses.
         for (int g = 0; g < dimension && basis.Count < guesses; g++)

@@ -1,8 +1,10 @@
 namespace Orbitarium.Correlation;
 
 /// <summary>
-/// Equation-of-motion CCSD excitation energies (EOM-EE-CCSD) of singlet states of a closed-shell RHF reference: the
-/// lowest eigenvalues of the CCSD Jacobian, found by Davidson iterations on its right eigenvectors.
+/// Equation-of-motion CCSD excitation energies (EOM-EE-CCSD): singlets of a closed-shell RHF reference in the
+/// spin-adapted equations (<see cref="Singlets"/>), triplets of a closed shell and the states of a UHF reference in
+/// the spin-orbital ones (<see cref="Triplets"/>, <see cref="Unrestricted"/>). Each is the set of lowest eigenvalues
+/// of the CCSD Jacobian, found by Davidson iterations on its right eigenvectors.
 /// </summary>
 /// <remarks>
 /// J. F. Stanton and R. J. Bartlett, J. Chem. Phys. 98, 7029 (1993); the eigenvalues equal those of CCSD linear
@@ -24,6 +26,43 @@ public static class EomCcsd
     public static ExcitedStatesResult Singlets(MolecularOrbitalHamiltonian hamiltonian, int states = 5, CorrelationOptions? options = null,
         IProgress<CorrelationProgress>? progress = null, CancellationToken cancellationToken = default) =>
         Run(hamiltonian, states, options, progress, cancellationToken, privateHamiltonian: false);
+
+    /// <summary>Runs CCSD, then finds the lowest <paramref name="states"/> triplet excitation energies of a closed
+    /// shell (spin-orbital equations, memory (2m)⁴).</summary>
+    /// <param name="hamiltonian">MO Hamiltonian of a closed-shell RHF reference.</param>
+    /// <param name="states">Number of excited states (default 5).</param>
+    /// <param name="options">Thresholds, iterations, DIIS, frozen core, memory budget.</param>
+    /// <param name="progress">Receives the CCSD iterations, then the eigenvalue iterations.</param>
+    /// <param name="cancellationToken">Stops the calculation.</param>
+    public static ExcitedStatesResult Triplets(MolecularOrbitalHamiltonian hamiltonian, int states = 5, CorrelationOptions? options = null,
+        IProgress<CorrelationProgress>? progress = null, CancellationToken cancellationToken = default)
+    {
+        ArgumentNullException.ThrowIfNull(hamiltonian);
+        if (hamiltonian.AlphaOccupiedCount != hamiltonian.BetaOccupiedCount || hamiltonian.IsRestricted != true)
+            throw new OrbitariumInputException("EOM-CCSD triplets are defined here for a closed-shell RHF reference; for an open shell run a UHF reference and EomCcsd.Unrestricted.");
+        CheckStates(states);
+        return SpinOrbitalEom.Run(hamiltonian, states, tripletsOfClosedShell: true, options ?? CorrelationOptions.Default, progress, cancellationToken);
+    }
+
+    /// <summary>Runs CCSD, then finds the lowest <paramref name="states"/> S_z-conserving excitation energies of a UHF
+    /// (or any) reference in the spin-orbital equations: for an open shell, its excited doublets, quartets, … together.</summary>
+    /// <param name="hamiltonian">MO Hamiltonian of a UHF (or RHF) reference.</param>
+    /// <param name="states">Number of excited states (default 5).</param>
+    /// <param name="options">Thresholds, iterations, DIIS, frozen core, memory budget.</param>
+    /// <param name="progress">Receives the CCSD iterations, then the eigenvalue iterations.</param>
+    /// <param name="cancellationToken">Stops the calculation.</param>
+    public static ExcitedStatesResult Unrestricted(MolecularOrbitalHamiltonian hamiltonian, int states = 5, CorrelationOptions? options = null,
+        IProgress<CorrelationProgress>? progress = null, CancellationToken cancellationToken = default)
+    {
+        ArgumentNullException.ThrowIfNull(hamiltonian);
+        CheckStates(states);
+        return SpinOrbitalEom.Run(hamiltonian, states, tripletsOfClosedShell: false, options ?? CorrelationOptions.Default, progress, cancellationToken);
+    }
+
+    private static void CheckStates(int states)
+    {
+        if (states < 1) throw new OrbitariumInputException($"Ask for at least one excited state, got {states}.");
+    }
 
     internal static ExcitedStatesResult Run(MolecularOrbitalHamiltonian hamiltonian, int states, CorrelationOptions? options,
         IProgress<CorrelationProgress>? progress, CancellationToken ct, bool privateHamiltonian)

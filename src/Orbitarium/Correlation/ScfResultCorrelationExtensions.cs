@@ -121,19 +121,25 @@ public static class ScfResultCorrelationExtensions
         return Correlation.Ccsd.ComputeOnPrivateHamiltonian(Hamiltonian(scf, options, "CCSD(T)", cancellationToken), true, options, progress, cancellationToken);
     }
 
-    /// <summary>EOM-CCSD singlet excitation energies of a closed-shell RHF result (see <see cref="Correlation.EomCcsd"/>).</summary>
-    /// <param name="scf">A converged closed-shell RHF result.</param>
+    /// <summary>EOM-CCSD excitation energies (see <see cref="Correlation.EomCcsd"/>): singlets of a closed-shell RHF
+    /// result (<paramref name="triplets"/> false) or its triplets, or the S_z-conserving states of a UHF result.</summary>
+    /// <param name="scf">A converged RHF (closed shell) or UHF result.</param>
     /// <param name="states">Number of excited states (default 5).</param>
+    /// <param name="triplets">For an RHF result: triplets instead of singlets (default false). Ignored for UHF.</param>
     /// <param name="options">Thresholds, iterations, frozen core, memory budget.</param>
     /// <param name="progress">Receives the CCSD iterations, then the eigenvalue iterations.</param>
     /// <param name="cancellationToken">Stops the calculation.</param>
-    public static ExcitedStatesResult EomCcsd(this ScfResult scf, int states = 5, CorrelationOptions? options = null,
+    public static ExcitedStatesResult EomCcsd(this ScfResult scf, int states = 5, bool triplets = false, CorrelationOptions? options = null,
         IProgress<CorrelationProgress>? progress = null, CancellationToken cancellationToken = default)
     {
-        ArgumentNullException.ThrowIfNull(scf);
-        if (scf.Reference != ScfReference.Restricted || scf.AlphaElectronCount != scf.BetaElectronCount)
+        RequireRhfOrUhf(scf, "EOM-CCSD");
+        if (scf.Reference == ScfReference.Restricted && scf.AlphaElectronCount != scf.BetaElectronCount)
             throw new OrbitariumInputException(
-                $"EOM-CCSD here computes singlet states of a closed-shell RHF reference, but this is {scf.MethodName} with {scf.AlphaElectronCount} α and {scf.BetaElectronCount} β electrons: run RunRhf on a closed-shell molecule.");
+                $"EOM-CCSD on an RHF result needs a closed shell, but this one has {scf.AlphaElectronCount} α and {scf.BetaElectronCount} β electrons: run RunUhf for an open shell.");
+        if (scf.Reference == ScfReference.Unrestricted)
+            return Correlation.EomCcsd.Unrestricted(Hamiltonian(scf, options, "EOM-CCSD", cancellationToken), states, options, progress, cancellationToken);
+        if (triplets)
+            return Correlation.EomCcsd.Triplets(Hamiltonian(scf, options, "EOM-CCSD", cancellationToken), states, options, progress, cancellationToken);
         return Correlation.EomCcsd.Run(Hamiltonian(scf, options, "CCSD", cancellationToken), states, options, progress, cancellationToken,
             privateHamiltonian: true);
     }

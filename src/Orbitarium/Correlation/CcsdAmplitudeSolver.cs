@@ -70,16 +70,12 @@ internal sealed class CcsdAmplitudeSolver
                     for (int b = 0; b < v; b++)
                         T2[T2i(i, j, a, b)] = G(i, j, o + a, o + b) / (d1[i * v + a] + d1[j * v + b]);
         double mp2 = Energy(new double[T1.Length], T2);
-        var energies = new List<double>();
-        var residuals = new List<double>();
         var diis = new AmplitudeDiis(options.DiisVectors);
-        double energy = mp2;
-        bool converged = false;
-        string reason = $"reached the limit of {options.MaxIterations} iterations";
+        var convergence = new AmplitudeConvergence(options, progress, "CCSD", mp2);
         int iteration = 0;
         if (o == 0 || v == 0)
         {
-            return new Outcome(0, 0, 0, true, "no excitations possible", energies, residuals, 0);
+            return new Outcome(0, 0, 0, true, "no excitations possible", [], [], 0);
         }
         while (iteration < options.MaxIterations)
         {
@@ -107,28 +103,13 @@ internal sealed class CcsdAmplitudeSolver
             Array.Copy(vec, t1New.Length, t2New, 0, t2New.Length);
             T1 = t1New;
             T2 = t2New;
-            double newEnergy = Energy(T1, T2);
-            double change = Math.Abs(newEnergy - energy);
-            energy = newEnergy;
-            energies.Add(energy);
-            residuals.Add(rms);
-            progress?.Report(new CorrelationProgress("CCSD", iteration, energy, rms));
-            if (!double.IsFinite(energy))
-            {
-                reason = "the amplitudes diverged (non-finite energy)";
-                break;
-            }
-            if (change < options.EnergyThresholdHartree && rms < options.ResidualThreshold)
-            {
-                converged = true;
-                reason = $"energy change {change:E1} Eh and RMS amplitude change {rms:E1} below the thresholds";
-                break;
-            }
+            if (convergence.Record(iteration, Energy(T1, T2), rms)) break;
         }
         double t1Norm = 0;
         foreach (var t in T1) t1Norm += t * t;
         double t1Diagnostic = o > 0 ? Math.Sqrt(t1Norm / (2.0 * o)) : 0;
-        return new Outcome(energy, mp2, iteration, converged, reason, energies, residuals, t1Diagnostic);
+        return new Outcome(convergence.Energy, mp2, iteration, convergence.Converged, convergence.Reason, convergence.Energies,
+            convergence.Residuals, t1Diagnostic);
     }
 
     private double Energy(double[] t1, double[] t2)

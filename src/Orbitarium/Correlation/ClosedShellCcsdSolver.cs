@@ -131,9 +131,7 @@ internal sealed class ClosedShellCcsdSolver
     public CcsdAmplitudeSolver.Outcome Solve(CorrelationOptions options, IProgress<CorrelationProgress>? progress, CancellationToken ct)
     {
         int o = _o, v = _v;
-        var energies = new List<double>();
-        var residuals = new List<double>();
-        if (o == 0 || v == 0) return new CcsdAmplitudeSolver.Outcome(0, 0, 0, true, "no excitations possible", energies, residuals, 0);
+        if (o == 0 || v == 0) return new CcsdAmplitudeSolver.Outcome(0, 0, 0, true, "no excitations possible", [], [], 0);
         var d1 = new double[o * v];
         for (int i = 0; i < o; i++)
             for (int a = 0; a < v; a++)
@@ -149,9 +147,7 @@ internal sealed class ClosedShellCcsdSolver
                         T2[((i * o + j) * v + a) * v + b] = G(i, o + a, j, o + b) / (d1[i * v + a] + d1[j * v + b]);
         double mp2 = Energy(new double[T1.Length], T2);
         var diis = new AmplitudeDiis(options.DiisVectors);
-        double energy = mp2;
-        bool converged = false;
-        string reason = $"reached the limit of {options.MaxIterations} iterations";
+        var convergence = new AmplitudeConvergence(options, progress, "CCSD", mp2);
         int iteration = 0;
         try
         {
@@ -197,23 +193,7 @@ internal sealed class ClosedShellCcsdSolver
                 Array.Copy(vec, n1, t2, 0, t2.Length);
                 T1 = t1;
                 T2 = t2;
-                double newEnergy = Energy(T1, T2);
-                double change = Math.Abs(newEnergy - energy);
-                energy = newEnergy;
-                energies.Add(energy);
-                residuals.Add(rms);
-                progress?.Report(new CorrelationProgress("CCSD", iteration, energy, rms));
-                if (!double.IsFinite(energy))
-                {
-                    reason = "the amplitudes diverged (non-finite energy)";
-                    break;
-                }
-                if (change < options.EnergyThresholdHartree && rms < options.ResidualThreshold)
-                {
-                    converged = true;
-                    reason = $"energy change {change:E1} Eh and RMS amplitude change {rms:E1} below the thresholds";
-                    break;
-                }
+                if (convergence.Record(iteration, Energy(T1, T2), rms)) break;
             }
         }
         finally
@@ -226,51 +206,38 @@ internal sealed class ClosedShellCcsdSolver
         // T. J. Lee and P. R. Taylor, Int. J. Quantum Chem. Symp. 23, 199 (1989): ‖t1‖ / √N for N correlated
         // electrons (2o), as the spin-orbital code reports it.
         double t1Diagnostic = Math.Sqrt(t1Norm / (2.0 * o));
-        return new CcsdAmplitudeSolver.Outcome(energy, mp2, iteration, converged, reason, energies, residuals, t1Diagnostic);
+        return new CcsdAmplitudeSolver.Outcome(convergence.Energy, mp2, iteration, convergence.Converged, convergence.Reason,
+            convergence.Energies, convergence.Residuals, t1Diagnostic);
     }
 
     /// <summary>
     /// The CCSD Jacobian A = ∂Ω/∂t at the current amplitudes applied to <paramref name="x"/> (singles then doubles,
     /// doubles with x_ij^ab = x_ji^ba), written to <paramref name="sigma"/>.
     /// </summary>
-    /// <remarks>
-    /// Ω is a polynomial of degree at most four in the amplitudes (the Hamiltonian has two-body terms only, so the
-    /// Baker–Campbell–Hausdorff expansion of e^{−T} H e^{T} ends at the fourfold commutator), hence along any line
-    /// t + s·x. The four-point central stencil dΩ/ds = [8(Ω₁ − Ω₋₁) − (Ω₂ − Ω₋₂)] / (12 h), Ω_k = Ω(t + k h x), is exact
-    /// for such polynomials, so the product is exact up to round-off whatever the step. The step is chosen so the
-    /// displaced amplitudes stay of the size of the amplitudes themselves. The amplitudes and the dressing are
-    /// restored on return.
-    /// </remarks>
+    /// <remarks>Exact up to round-off: Ω is quartic in the amplitudes (<see cref="QuarticStencil"/>). The amplitudes
+    /// and the dressing are restored on return.</remarks>
     public void JacobianTimes(double[] x, double[] sigma, CancellationToken ct)
     {
         int n1 = _o * _v, n2 = T2.Length;
-        var t1 = (double[])T1.Clone();
-        var t2 = (double[])T2.Clone();
-        double norm = 0;
-        foreach (var value in x) norm = Math.Max(norm, Math.Abs(value));
+        var t1 = T1;
+        var t2 = T2;
         Array.Clear(sigma);
-        if (norm == 0) return;
-        double h = 0.01 / norm;
-        ReadOnlySpan<double> weights = [8.0, -1.0];
         var shifted1 = new double[n1];
         var shifted2 = new double[n2];
         try
         {
-            for (int step = 1; step <= 2; step++)
-                for (int sign = -1; sign <= 1; sign += 2)
-                {
-                    ct.ThrowIfCancellationRequested();
-                    double s = sign * step * h;
-                    for (int i = 0; i < n1; i++) shifted1[i] = t1[i] + s * x[i];
-                    for (int i = 0; i < n2; i++) shifted2[i] = t2[i] + s * x[n1 + i];
-                    T1 = shifted1;
-                    T2 = shifted2;
-                    Dress(shifted1);
-                    var (r1, r2) = Residual(ct);
-                    double c = sign * weights[step - 1] / (12 * h);
-                    for (int i = 0; i < n1; i++) sigma[i] += c * r1[i];
-                    for (int i = 0; i < n2; i++) sigma[n1 + i] += c * r2[i];
-                }
+            foreach (var (s, weight) in QuarticStencil.Points(x))
+            {
+                ct.ThrowIfCancellationRequested();
+                for (int i = 0; i < n1; i++) shifted1[i] = t1[i] + s * x[i];
+                for (int i = 0; i < n2; i++) shifted2[i] = t2[i] + s * x[n1 + i];
+                T1 = shifted1;
+                T2 = shifted2;
+                Dress(shifted1);
+                var (r1, r2) = Residual(ct);
+                for (int i = 0; i < n1; i++) sigma[i] += weight * r1[i];
+                for (int i = 0; i < n2; i++) sigma[n1 + i] += weight * r2[i];
+            }
         }
         finally
         {
@@ -316,8 +283,6 @@ internal sealed class ClosedShellCcsdSolver
 
     /// <summary>Re-dresses the integrals from the singles they carry to <paramref name="t1"/>, in place.</summary>
     internal void Dress(double[] t1) => _integrals.DressWith(t1);
-
-    private static void Axpy(double s, ReadOnlySpan<double> x, Span<double> y) => MolecularIntegralTransformation.Axpy(s, x, y);
 
     /// <summary>The CCSD residuals Ω_ai and Ω_aibj at the current amplitudes (integrals dressed with T1).</summary>
     internal (double[] Singles, double[] Doubles) Residual(CancellationToken ct)
@@ -482,7 +447,7 @@ internal sealed class ClosedShellCcsdSolver
             for (int j = 0; j < o; j++)
             {
                 var target = x.AsSpan((i * o + j) * vv, vv);
-                for (int k = 0; k < o; k++) Axpy(-foo[k * o + j], t2.AsSpan((i * o + k) * vv, vv), target);
+                for (int k = 0; k < o; k++) MolecularIntegralTransformation.Axpy(-foo[k * o + j], t2.AsSpan((i * o + k) * vv, vv), target);
             }
 
         for (int i = 0; i < o; i++)

@@ -23,12 +23,8 @@ public static class DavidsonSolver
         CorrelationOptions? options = null, IProgress<CorrelationProgress>? progress = null, CancellationToken cancellationToken = default,
         string method = "Davidson")
     {
-        ArgumentNullException.ThrowIfNull(multiply);
+        Check(dimension, diagonal.Length, multiply, roots);
         options ??= CorrelationOptions.Default;
-        if (roots < 1 || roots > dimension)
-            throw new OrbitariumInputException($"Asked for {roots} roots of a {dimension}-dimensional problem: ask for between 1 and {dimension}.");
-        if (diagonal.Length != dimension)
-            throw new OrbitariumInputException($"The diagonal has {diagonal.Length} entries for dimension {dimension}.");
         var diag = diagonal.ToArray();
         if (dimension <= 64) return Dense(dimension, multiply, roots);
         return Iterate(dimension, diag, multiply, roots, options, progress, cancellationToken, method, symmetric: true, project: null);
@@ -52,13 +48,18 @@ public static class DavidsonSolver
         int roots, Action<double[]>? project = null, CorrelationOptions? options = null, IProgress<CorrelationProgress>? progress = null,
         CancellationToken cancellationToken = default, string method = "Davidson")
     {
+        Check(dimension, diagonal.Length, multiply, roots);
+        return Iterate(dimension, diagonal.ToArray(), multiply, roots, options ?? CorrelationOptions.Default, progress, cancellationToken,
+            method, symmetric: false, project);
+    }
+
+    private static void Check(int dimension, int diagonalLength, Action<double[], double[]> multiply, int roots)
+    {
         ArgumentNullException.ThrowIfNull(multiply);
-        options ??= CorrelationOptions.Default;
         if (roots < 1 || roots > dimension)
             throw new OrbitariumInputException($"Asked for {roots} roots of a {dimension}-dimensional problem: ask for between 1 and {dimension}.");
-        if (diagonal.Length != dimension)
-            throw new OrbitariumInputException($"The diagonal has {diagonal.Length} entries for dimension {dimension}.");
-        return Iterate(dimension, diagonal.ToArray(), multiply, roots, options, progress, cancellationToken, method, symmetric: false, project);
+        if (diagonalLength != dimension)
+            throw new OrbitariumInputException($"The diagonal has {diagonalLength} entries for dimension {dimension}.");
     }
 
     private static DavidsonResult Iterate(int dimension, double[] diag, Action<double[], double[]> multiply, int roots,

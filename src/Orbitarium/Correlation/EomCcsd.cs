@@ -64,6 +64,36 @@ public static class EomCcsd
         if (states < 1) throw new OrbitariumInputException($"Ask for at least one excited state, got {states}.");
     }
 
+    /// <summary>Numbers the Davidson subspace keeps for <paramref name="states"/> roots of a problem of the given
+    /// size: up to max(8·states, 24) vectors and as many products, plus a few work vectors.</summary>
+    internal static double SubspaceDoubles(int states, double dimension) => (2.0 * Math.Max(8 * states, 24) + 6) * dimension;
+
+    /// <summary>Refuses a problem with nothing to excite.</summary>
+    internal static void RequireExcitations(int occupied, int virtuals)
+    {
+        if (occupied == 0 || virtuals == 0)
+            throw new OrbitariumInputException("EOM-CCSD needs occupied and virtual orbitals to excite between; this system has none to excite.");
+    }
+
+    /// <summary>Refuses unconverged CCSD amplitudes: the Jacobian is only meaningful at the CCSD solution.</summary>
+    internal static void RequireConverged(CcsdAmplitudeSolver.Outcome ground)
+    {
+        if (!ground.Converged)
+            throw new OrbitariumInputException($"EOM-CCSD needs converged CCSD amplitudes, but CCSD stopped: {ground.StopReason}. Give CCSD more iterations (WithMaxIterations).");
+    }
+
+    /// <summary>The Davidson iterations on a Jacobian: residual threshold no tighter than 1e-6 (the eigenvalue
+    /// converges quadratically in it), refused when not converged.</summary>
+    internal static DavidsonResult Diagonalise(int dimension, double[] diagonal, Action<double[], double[]> multiply, int states,
+        Action<double[]> project, CorrelationOptions options, IProgress<CorrelationProgress>? progress, CancellationToken ct)
+    {
+        var davidson = DavidsonSolver.SolveNonSymmetric(dimension, diagonal, multiply, states, project,
+            options.WithThresholds(options.EnergyThresholdHartree, Math.Max(options.ResidualThreshold, 1e-6)), progress, ct, "EOM-CCSD");
+        if (!davidson.Converged)
+            throw new OrbitariumInputException($"The EOM-CCSD eigenvalue iterations did not converge ({davidson.StopReason}): ask for fewer states or more iterations (WithMaxIterations).");
+        return davidson;
+    }
+
     internal static ExcitedStatesResult Run(MolecularOrbitalHamiltonian hamiltonian, int states, CorrelationOptions? options,
         IProgress<CorrelationProgress>? progress, CancellationToken ct, bool privateHamiltonian)
     {
@@ -72,18 +102,15 @@ public static class EomCcsd
         if (!hamiltonian.IsClosedShell)
             throw new OrbitariumInputException(
                 "EOM-CCSD here computes singlet states of a closed-shell RHF reference; this reference is open-shell or unrestricted: use a closed-shell molecule and RunRhf.");
-        if (states < 1)
-            throw new OrbitariumInputException($"Ask for at least one excited state, got {states}.");
+        CheckStates(states);
         int nf = Mp2.CheckFrozenCore(options.FrozenCoreOrbitals, hamiltonian.AlphaOccupiedCount, hamiltonian.BetaOccupiedCount);
         int m = hamiltonian.OrbitalCount - nf, o = hamiltonian.AlphaOccupiedCount - nf, v = m - o;
-        // The Davidson subspace keeps up to max(8·states, 24) vectors and as many products, plus a few work vectors.
         double work = ClosedShellCcsdSolver.WorkingDoubles(m, o, options.DiisVectors)
-            + (2.0 * Math.Max(8 * states, 24) + 6) * (o * (double)v + (double)o * o * v * v);
+            + SubspaceDoubles(states, o * (double)v + (double)o * o * v * v);
         MemoryEstimate.Require("EOM-CCSD", (privateHamiltonian ? 0 : Math.Pow(hamiltonian.OrbitalCount, 4)) + work, options,
             "use a smaller basis, freeze core orbitals (WithFrozenCore), ask for fewer states, or raise the budget (WithMemoryBudgetMebibytes).");
         int dimension = o * v + o * o * v * v;
-        if (o == 0 || v == 0)
-            throw new OrbitariumInputException("EOM-CCSD needs occupied and virtual orbitals to excite between; this system has none to excite.");
+        RequireExcitations(o, v);
         // The singlet space: o·v singles and one double per unordered pair of (ia) and (jb).
         int singletDimension = o * v + o * v * (o * v + 1) / 2;
         if (states > singletDimension)
@@ -92,16 +119,12 @@ public static class EomCcsd
 
         var solver = new ClosedShellCcsdSolver(hamiltonian, nf, dressInPlace: privateHamiltonian, ct);
         var ground = solver.Solve(options, progress, ct);
-        if (!ground.Converged)
-            throw new OrbitariumInputException($"EOM-CCSD needs converged CCSD amplitudes, but CCSD stopped: {ground.StopReason}. Give CCSD more iterations (WithMaxIterations).");
+        RequireConverged(ground);
         try
         {
             var diagonal = solver.OrbitalEnergyDifferences();
-            var davidson = DavidsonSolver.SolveNonSymmetric(dimension, diagonal, (x, sigma) => solver.JacobianTimes(x, sigma, ct), states,
-                x => SymmetrizeDoubles(x, o, v), options.WithThresholds(options.EnergyThresholdHartree, Math.Max(options.ResidualThreshold, 1e-6)),
-                progress, ct, "EOM-CCSD");
-            if (!davidson.Converged)
-                throw new OrbitariumInputException($"The EOM-CCSD eigenvalue iterations did not converge ({davidson.StopReason}): ask for fewer states or more iterations (WithMaxIterations).");
+            var davidson = Diagonalise(dimension, diagonal, (x, sigma) => solver.JacobianTimes(x, sigma, ct), states,
+                x => SymmetrizeDoubles(x, o, v), options, progress, ct);
             double reference = hamiltonian.ReferenceEnergyHartree + ground.Energy;
             return new ExcitedStatesResult("EOM-CCSD", "singlet", reference, [.. davidson.Eigenvalues], [], [], nf);
         }

@@ -91,9 +91,10 @@ public static class MolecularIntegralTransformation
     /// needs at its peak beside the packed tensor, for N functions and k₁…k₄ orbitals.</summary>
     internal static double TransformDoubles(int n, int k1, int k2, int k3, int k4)
     {
+        // X1 and X2 side by side, then X2 and the result (per-thread chunk buffers are small).
         double n2 = (double)n * n, n3 = n2 * n;
         double half = (double)k1 * k2 * n2;
-        return n3 + Math.Max(k1 * n3 + half, half + (double)k1 * k2 * k3 * k4);
+        return Math.Max(k1 * n3 + half, half + (double)k1 * k2 * k3 * k4);
     }
 
     /// <summary>Fills <c>buffer</c>[(t − start)·N + μ] = (μν|λσ) for the flat indices t = (λ·N + σ)·N + ν in

@@ -7,7 +7,7 @@ namespace Orbitarium.Correlation;
 /// <remarks>
 /// Same eigenproblem as <see cref="EomCcsd"/>: the lowest eigenvalues of the CCSD Jacobian, here of the
 /// spin-orbital residual Ω = D·(t′ − t) of <see cref="CcsdAmplitudeSolver"/>, with products from the exact
-/// four-point stencil (the residual is quartic in the amplitudes). Trial vectors are kept antisymmetric
+/// <see cref="QuarticStencil"/>. Trial vectors are kept antisymmetric
 /// (x_ij^ab = −x_ji^ab = −x_ij^ba) and S_z-conserving, and for triplets odd under α↔β. Memory (2m)⁴ as for
 /// spin-orbital CCSD.
 /// </remarks>
@@ -21,16 +21,14 @@ internal static class SpinOrbitalEom
         int occupiedCount = hamiltonian.AlphaOccupiedCount + hamiltonian.BetaOccupiedCount - 2 * nf;
         double dim = occupiedCount * (double)(n - occupiedCount);
         MemoryEstimate.Require("EOM-CCSD", Ccsd.EstimateDoubles(n, occupiedCount, options.DiisVectors)
-                + (2.0 * Math.Max(8 * states, 24) + 6) * (dim + dim * dim), options,
+                + EomCcsd.SubspaceDoubles(states, dim + dim * dim), options,
             "use a smaller basis, freeze core orbitals (WithFrozenCore), ask for fewer states, or raise the budget (WithMemoryBudgetMebibytes).");
         var system = SpinOrbitalSystem.Build(hamiltonian, nf, ct);
         int o = system.Occupied, v = system.Virtual, size = system.Count;
-        if (o == 0 || v == 0)
-            throw new OrbitariumInputException("EOM-CCSD needs occupied and virtual orbitals to excite between; this system has none to excite.");
+        EomCcsd.RequireExcitations(o, v);
         var solver = new CcsdAmplitudeSolver(system);
         var ground = solver.Solve(options, progress, ct);
-        if (!ground.Converged)
-            throw new OrbitariumInputException($"EOM-CCSD needs converged CCSD amplitudes, but CCSD stopped: {ground.StopReason}. Give CCSD more iterations (WithMaxIterations).");
+        EomCcsd.RequireConverged(ground);
 
         int n1 = o * v, n2 = o * o * v * v, dimension = n1 + n2;
         var beta = system.IsBeta;
@@ -53,35 +51,28 @@ internal static class SpinOrbitalEom
         var t2 = (double[])solver.T2.Clone();
         void Multiply(double[] x, double[] sigma)
         {
-            double norm = 0;
-            foreach (var value in x) norm = Math.Max(norm, Math.Abs(value));
-            if (norm == 0) return;
-            double h = 0.01 / norm;
-            ReadOnlySpan<double> weights = [8.0, -1.0];
-            for (int step = 1; step <= 2; step++)
-                for (int sign = -1; sign <= 1; sign += 2)
-                {
-                    ct.ThrowIfCancellationRequested();
-                    double s = sign * step * h;
-                    var s1 = new double[n1];
-                    var s2 = new double[n2];
-                    for (int k = 0; k < n1; k++) s1[k] = t1[k] + s * x[k];
-                    for (int k = 0; k < n2; k++) s2[k] = t2[k] + s * x[n1 + k];
-                    solver.T1 = s1;
-                    solver.T2 = s2;
-                    var (u1, u2) = solver.Iterate(d1, ct);
-                    double c = sign * weights[step - 1] / (12 * h);
-                    for (int k = 0; k < n1; k++) sigma[k] += c * (u1[k] - s1[k]) * d1[k];
-                    for (int i = 0; i < o; i++)
-                        for (int j = 0; j < o; j++)
-                            for (int a = 0; a < v; a++)
-                            {
-                                int row = ((i * o + j) * v + a) * v;
-                                double dia = d1[i * v + a];
-                                for (int b = 0; b < v; b++)
-                                    sigma[n1 + row + b] += c * (u2[row + b] - s2[row + b]) * (dia + d1[j * v + b]);
-                            }
-                }
+            foreach (var (s, weight) in QuarticStencil.Points(x))
+            {
+                ct.ThrowIfCancellationRequested();
+                var s1 = new double[n1];
+                var s2 = new double[n2];
+                for (int k = 0; k < n1; k++) s1[k] = t1[k] + s * x[k];
+                for (int k = 0; k < n2; k++) s2[k] = t2[k] + s * x[n1 + k];
+                solver.T1 = s1;
+                solver.T2 = s2;
+                // The spin-orbital update is t′ = t + Ω/D, so Ω = D·(t′ − t).
+                var (u1, u2) = solver.Iterate(d1, ct);
+                for (int k = 0; k < n1; k++) sigma[k] += weight * (u1[k] - s1[k]) * d1[k];
+                for (int i = 0; i < o; i++)
+                    for (int j = 0; j < o; j++)
+                        for (int a = 0; a < v; a++)
+                        {
+                            int row = ((i * o + j) * v + a) * v;
+                            double dia = d1[i * v + a];
+                            for (int b = 0; b < v; b++)
+                                sigma[n1 + row + b] += weight * (u2[row + b] - s2[row + b]) * (dia + d1[j * v + b]);
+                        }
+            }
             solver.T1 = t1;
             solver.T2 = t2;
         }
@@ -126,10 +117,7 @@ internal static class SpinOrbitalEom
                         }
         }
 
-        var davidson = DavidsonSolver.SolveNonSymmetric(dimension, diagonal, Multiply, states, Project,
-            options.WithThresholds(options.EnergyThresholdHartree, Math.Max(options.ResidualThreshold, 1e-6)), progress, ct, "EOM-CCSD");
-        if (!davidson.Converged)
-            throw new OrbitariumInputException($"The EOM-CCSD eigenvalue iterations did not converge ({davidson.StopReason}): ask for fewer states or more iterations (WithMaxIterations).");
+        var davidson = EomCcsd.Diagonalise(dimension, diagonal, Multiply, states, Project, options, progress, ct);
         return new ExcitedStatesResult("EOM-CCSD", tripletsOfClosedShell ? "triplet" : "unrestricted",
             system.ReferenceEnergyHartree + ground.Energy, [.. davidson.Eigenvalues], [], [], nf);
     }
